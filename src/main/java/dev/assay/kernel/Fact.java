@@ -1,0 +1,52 @@
+package dev.assay.kernel;
+
+/**
+ * A formula or clause the kernel has accepted: an axiom of the problem, or the conclusion of a step whose rule
+ * checked. Only the kernel makes facts; code outside can hold them and pass them back as premises.
+ */
+public final class Fact {
+
+    private final Kernel owner;
+    private final String label;
+    private final Formula formula;
+    private final Clause clause;
+
+    Fact(Kernel owner, String label, Formula formula, Clause clause) {
+        if ((formula == null) == (clause == null)) throw new IllegalArgumentException("formula xor clause");
+        this.owner = owner;
+        this.label = label;
+        this.formula = formula;
+        this.clause = clause;
+    }
+
+    Kernel owner() {
+        return owner;
+    }
+
+    public String label() {
+        return label;
+    }
+
+    public boolean isClause() {
+        return clause != null;
+    }
+
+    /** The formula, or null for a clause fact. */
+    public Formula formula() {
+        return formula;
+    }
+
+    /** The clause, or null for a formula fact. */
+    public Clause clause() {
+        return clause;
+    }
+
+    public boolean isEmptyClause() {
+        return clause != null && clause.isEmpty();
+    }
+
+    @Override
+    public String toString() {
+        return label + ": " + (clause != null ? Printer.clause(clause) : Printer.formula(formula));
+    }
+}

@@ -1,0 +1,374 @@
+package dev.assay.kernel;
+
+import java.util.ArrayDeque;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.HashMap;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+
+/** Negation normal form, comparison modulo renaming and AC, and other iterative walks over formulas. */
+public final class Formulas {
+
+    private Formulas() {
+    }
+
+    // ---------------------------------------------------------------- negation normal form
+
+    private record Visit(Formula formula, boolean negated) {
+    }
+
+    private record Build(int kind, int count, Variable variable) {
+        static final int AND = 0, OR = 1, FORALL = 2, EXISTS = 3;
+    }
+
+    /** The kernel's negation normal form, exactly as FORMAT.md section 6 defines it. */
+    public static Formula nnf(Formula root) {
+        ArrayDeque<Object> work = new ArrayDeque<>();
+        ArrayList<Formula> results = new ArrayList<>();
+        work.push(new Visit(root, false));
+        while (!work.isEmpty()) {
+            Object item = work.pop();
+            if (item instanceof Build b) {
+                results.add(build(b, results));
+                continue;
+            }
+            Visit v = (Visit) item;
+            Formula f = v.formula;
+            boolean neg = v.negated;
+            if (f instanceof Formula.Atomic a) {
+                results.add(neg ? new Formula.Atomic(a.literal().negated()) : a);
+            } else if (f instanceof Formula.Constant c) {
+                results.add(Formula.Constant.of(c.value() != neg));
+            } else if (f instanceof Formula.Not n) {
+                work.push(new Visit(n.body(), !neg));
+            } else if (f instanceof Formula.Junction j) {
+                boolean and = (j instanceof Formula.And) != neg;
+                work.push(new Build(and ? Build.AND : Build.OR, j.parts().size(), null));
+                for (int i = j.parts().size() - 1; i >= 0; i--) work.push(new Visit(j.parts().get(i), neg));
+            } else if (f instanceof Formula.Implies imp) {
+                if (!neg) { // nnf(not a) or nnf(b)
+                    work.push(new Build(Build.OR, 2, null));
+                    work.push(new Visit(imp.right(), false));
+                    work.push(new Visit(imp.left(), true));
+                } else { // nnf(a) and nnf(not b)
+                    work.push(new Build(Build.AND, 2, null));
+                    work.push(new Visit(imp.right(), true));
+                    work.push(new Visit(imp.left(), false));
+                }
+            } else if (f instanceof Formula.Iff iff) {
+                Formula a = iff.left();
+                Formula b = iff.right();
+                work.push(new Build(Build.AND, 2, null));
+                if (!neg) { // (nnf(not a) or nnf(b)) and (nnf(a) or nnf(not b))
+                    work.push(new Build(Build.OR, 2, null));
+                    work.push(new Visit(b, true));
+                    work.push(new Visit(a, false));
+                    work.push(new Build(Build.OR, 2, null));
+                    work.push(new Visit(b, false));
+                    work.push(new Visit(a, true));
+                } else { // (nnf(a) or nnf(b)) and (nnf(not a) or nnf(not b))
+                    work.push(new Build(Build.OR, 2, null));
+                    work.push(new Visit(b, true));
+                    work.push(new Visit(a, true));
+                    work.push(new Build(Build.OR, 2, null));
+                    work.push(new Visit(b, false));
+                    work.push(new Visit(a, false));
+                }
+            } else if (f instanceof Formula.Quantified q) {
+                boolean universal = q.universal() != neg;
+                work.push(new Build(universal ? Build.FORALL : Build.EXISTS, 1, q.variable()));
+                work.push(new Visit(q.body(), neg));
+            }
+        }
+        return results.get(0);
+    }
+
+    private static Formula build(Build b, ArrayList<Formula> results) {
+        int from = results.size() - b.count;
+        List<Formula> parts = new ArrayList<>(results.subList(from, results.size()));
+        results.subList(from, results.size()).clear();
+        switch (b.kind) {
+            case Build.FORALL:
+                return new Formula.Quantified(true, b.variable, parts.get(0));
+            case Build.EXISTS:
+                return new Formula.Quantified(false, b.variable, parts.get(0));
+            default:
+                return junction(b.kind == Build.AND, parts);
+        }
+    }
+
+    /** An and/or of {@code parts} with nested ones of the same kind spliced in; one part stands alone. */
+    public static Formula junction(boolean and, List<Formula> parts) {
+        List<Formula> flat = new ArrayList<>(parts.size());
+        for (Formula p : parts) {
+            if (and && p instanceof Formula.And a) flat.addAll(a.parts());
+            else if (!and && p instanceof Formula.Or o) flat.addAll(o.parts());
+            else flat.add(p);
+        }
+        if (flat.size() == 1) return flat.get(0);
+        return and ? new Formula.And(flat) : new Formula.Or(flat);
+    }
+
+    // ---------------------------------------------------------------- comparison
+
+    /**
+     * Canonical numbering of formulas modulo renaming of bound variables (bound variables become de Bruijn indices),
+     * associativity and commutativity of and/or (nested junctions are flattened and their parts sorted), equation
+     * orientation, and {@code not} applied to an atom or constant. Two formulas are equivalent in this sense exactly
+     * when they get the same number from one instance. Cost: O(n log n) in the size of the formulas.
+     */
+    public static final class Canon {
+        private static final int ATOM = 1, CONST = 2, NOT = 3, AND = 4, OR = 5, IMPLIES = 6, IFF = 7, QUANT = 8;
+        private static final int APP = 9, BOUND = 10, FREE = 11;
+
+        private record Key(int[] data) {
+            @Override
+            public boolean equals(Object o) {
+                return o instanceof Key k && Arrays.equals(k.data, data);
+            }
+
+            @Override
+            public int hashCode() {
+                return Arrays.hashCode(data);
+            }
+        }
+
+        private final Map<Key, Integer> table = new HashMap<>();
+        private final List<int[]> byId = new ArrayList<>();
+        private final Map<Symbol, Integer> symbols = new HashMap<>();
+        private final Map<Variable, Integer> names = new HashMap<>();
+
+        private int intern(int... data) {
+            Key k = new Key(data);
+            Integer id = table.get(k);
+            if (id != null) return id;
+            int fresh = byId.size();
+            byId.add(data);
+            table.put(k, fresh);
+            return fresh;
+        }
+
+        private int symbolId(Symbol s) {
+            return symbols.computeIfAbsent(s, x -> symbols.size());
+        }
+
+        private int nameId(Variable v) {
+            return names.computeIfAbsent(v, x -> names.size());
+        }
+
+        private record Exit(Formula formula) {
+        }
+
+        /** The canonical number of {@code root}; free variables are kept by name. */
+        public int of(Formula root) {
+            Map<Variable, ArrayDeque<Integer>> binders = new HashMap<>();
+            int[] depth = {0};
+            ArrayDeque<Object> work = new ArrayDeque<>();
+            ArrayList<Integer> results = new ArrayList<>();
+            work.push(root);
+            while (!work.isEmpty()) {
+                Object item = work.pop();
+                if (item instanceof Exit e) {
+                    Formula f = e.formula;
+                    if (f instanceof Formula.Quantified q) {
+                        int body = results.remove(results.size() - 1);
+                        binders.get(q.variable()).pop();
+                        depth[0]--;
+                        results.add(intern(QUANT, q.universal() ? 1 : 0, body));
+                    } else if (f instanceof Formula.Not) {
+                        int body = results.remove(results.size() - 1);
+                        results.add(negate(body));
+                    } else if (f instanceof Formula.Junction j) {
+                        int tag = j instanceof Formula.And ? AND : OR;
+                        int n = j.parts().size();
+                        List<Integer> parts = results.subList(results.size() - n, results.size());
+                        ArrayList<Integer> flat = new ArrayList<>();
+                        for (int p : parts) {
+                            int[] d = byId.get(p);
+                            if (d[0] == tag) for (int i = 1; i < d.length; i++) flat.add(d[i]);
+                            else flat.add(p);
+                        }
+                        parts.clear();
+                        int[] data = new int[flat.size() + 1];
+                        data[0] = tag;
+                        int[] sorted = flat.stream().mapToInt(Integer::intValue).sorted().toArray();
+                        System.arraycopy(sorted, 0, data, 1, sorted.length);
+                        results.add(intern(data));
+                    } else if (f instanceof Formula.Implies || f instanceof Formula.Iff) {
+                        int r = results.remove(results.size() - 1);
+                        int l = results.remove(results.size() - 1);
+                        results.add(intern(f instanceof Formula.Implies ? IMPLIES : IFF, l, r));
+                    }
+                    continue;
+                }
+                Formula f = (Formula) item;
+                if (f instanceof Formula.Atomic a) {
+                    results.add(atom(a.literal(), binders, depth[0]));
+                } else if (f instanceof Formula.Constant c) {
+                    results.add(intern(CONST, c.value() ? 1 : 0));
+                } else if (f instanceof Formula.Quantified q) {
+                    depth[0]++;
+                    binders.computeIfAbsent(q.variable(), x -> new ArrayDeque<>()).push(depth[0]);
+                    work.push(new Exit(f));
+                    work.push(q.body());
+                } else if (f instanceof Formula.Not n) {
+                    work.push(new Exit(f));
+                    work.push(n.body());
+                } else if (f instanceof Formula.Junction j) {
+                    work.push(new Exit(f));
+                    for (int i = j.parts().size() - 1; i >= 0; i--) work.push(j.parts().get(i));
+                } else if (f instanceof Formula.Implies imp) {
+                    work.push(new Exit(f));
+                    work.push(imp.right());
+                    work.push(imp.left());
+                } else if (f instanceof Formula.Iff iff) {
+                    work.push(new Exit(f));
+                    work.push(iff.right());
+                    work.push(iff.left());
+                }
+            }
+            return results.get(0);
+        }
+
+        private int negate(int body) {
+            int[] d = byId.get(body);
+            if (d[0] == ATOM) return intern(ATOM, 1 - d[1], d[2]);
+            if (d[0] == CONST) return intern(CONST, 1 - d[1]);
+            return intern(NOT, body);
+        }
+
+        private int atom(Literal l, Map<Variable, ArrayDeque<Integer>> binders, int depth) {
+            Application a = l.atom();
+            int sign = l.positive() ? 1 : 0;
+            Map<Term, Integer> memo = new HashMap<>();
+            if (a.isEquation()) {
+                int x = term(a.argument(0), binders, depth, memo);
+                int y = term(a.argument(1), binders, depth, memo);
+                return intern(ATOM, sign, intern(APP, symbolId(Symbol.EQUALITY), Math.min(x, y), Math.max(x, y)));
+            }
+            return intern(ATOM, sign, term(a, binders, depth, memo));
+        }
+
+        private int term(Term root, Map<Variable, ArrayDeque<Integer>> binders, int depth, Map<Term, Integer> memo) {
+            ArrayDeque<Term> stack = new ArrayDeque<>();
+            stack.push(root);
+            while (!stack.isEmpty()) {
+                Term t = stack.peek();
+                if (memo.containsKey(t)) {
+                    stack.pop();
+                    continue;
+                }
+                if (t instanceof Variable v) {
+                    ArrayDeque<Integer> b = binders.get(v);
+                    memo.put(t, b == null || b.isEmpty() ? intern(FREE, nameId(v)) : intern(BOUND, depth - b.peek()));
+                    stack.pop();
+                    continue;
+                }
+                Application a = (Application) t;
+                int[] data = new int[a.arity() + 2];
+                data[0] = APP;
+                data[1] = symbolId(a.symbol());
+                boolean ready = true;
+                for (int i = 0; i < a.arity(); i++) {
+                    Integer c = memo.get(a.argument(i));
+                    if (c == null) {
+                        ready = false;
+                        stack.push(a.argument(i));
+                    } else {
+                        data[i + 2] = c;
+                    }
+                }
+                if (!ready) continue;
+                stack.pop();
+                memo.put(t, intern(data));
+            }
+            return memo.get(root);
+        }
+    }
+
+    /** Equal modulo renaming of bound variables, associativity and commutativity of and/or, and orientation. */
+    public static boolean equivalent(Formula a, Formula b) {
+        Canon c = new Canon();
+        return c.of(a) == c.of(b);
+    }
+
+    // ---------------------------------------------------------------- walks
+
+    /** Calls {@code visitor} on every subformula, parents first. */
+    static void forEach(Formula root, java.util.function.Consumer<Formula> visitor) {
+        ArrayDeque<Formula> stack = new ArrayDeque<>();
+        stack.push(root);
+        while (!stack.isEmpty()) {
+            Formula f = stack.pop();
+            visitor.accept(f);
+            for (Formula c : children(f)) stack.push(c);
+        }
+    }
+
+    static List<Formula> children(Formula f) {
+        if (f instanceof Formula.Not n) return List.of(n.body());
+        if (f instanceof Formula.Junction j) return j.parts();
+        if (f instanceof Formula.Implies i) return List.of(i.left(), i.right());
+        if (f instanceof Formula.Iff i) return List.of(i.left(), i.right());
+        if (f instanceof Formula.Quantified q) return List.of(q.body());
+        return List.of();
+    }
+
+    private record Leave(Variable variable) {
+    }
+
+    /** The variables that occur free, in order of first occurrence. */
+    public static Set<Variable> freeVariables(Formula root) {
+        Set<Variable> free = new LinkedHashSet<>();
+        Map<Variable, Integer> bound = new HashMap<>();
+        ArrayDeque<Object> work = new ArrayDeque<>();
+        work.push(root);
+        while (!work.isEmpty()) {
+            Object item = work.pop();
+            if (item instanceof Leave l) {
+                bound.merge(l.variable, -1, Integer::sum);
+                continue;
+            }
+            Formula f = (Formula) item;
+            if (f instanceof Formula.Atomic a) {
+                Set<Variable> vs = new LinkedHashSet<>();
+                Terms.collectVariables(a.literal().atom(), vs);
+                for (Variable v : vs) if (bound.getOrDefault(v, 0) == 0) free.add(v);
+            } else if (f instanceof Formula.Quantified q) {
+                bound.merge(q.variable(), 1, Integer::sum);
+                work.push(new Leave(q.variable()));
+                work.push(q.body());
+            } else {
+                List<Formula> cs = children(f);
+                for (int i = cs.size() - 1; i >= 0; i--) work.push(cs.get(i));
+            }
+        }
+        return free;
+    }
+
+    /** Every symbol occurring in the formula. */
+    static Set<Symbol> symbols(Formula root) {
+        Set<Symbol> out = new LinkedHashSet<>();
+        forEach(root, f -> {
+            if (f instanceof Formula.Atomic a) collectSymbols(a.literal().atom(), out);
+        });
+        return out;
+    }
+
+    /** Adds every symbol of {@code t} except equality. */
+    static void collectSymbols(Term t, Set<Symbol> into) {
+        Terms.forEachSubterm(t, s -> {
+            if (s instanceof Application a && !a.isEquation()) into.add(a.symbol());
+        });
+    }
+
+    /** The number of nodes, for limits and reports. */
+    public static long size(Formula root) {
+        long[] n = {0};
+        forEach(root, f -> n[0]++);
+        return n[0];
+    }
+}

@@ -1,0 +1,427 @@
+package dev.assay.kernel;
+
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.LinkedHashMap;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+
+/**
+ * The trusted kernel: every rule of the certificate language, one method each. A rule returns the checked
+ * conclusion as a {@link Fact}, or a {@link Outcome.Rejected} that says what was stated, what was derived and why.
+ *
+ * <p>One kernel checks one certificate against one problem. It owns the term factory, so every term of the check is
+ * hash-consed in one place, and the signature, which only accepted {@code skolemize} and {@code define} steps
+ * extend. Premises must be facts of this kernel.
+ *
+ * <pre>
+ *   formula rules: negate  nnf  skolemize  clausify  define  abbreviate
+ *   clause rules:  resolve  factor  instantiate  paramodulate  eqres  eqfactor  reflexivity
+ * </pre>
+ */
+public final class Kernel {
+
+    private final Problem problem;
+    private final TermFactory terms;
+    private final Signature signature;
+    private final Map<String, Fact> axioms = new LinkedHashMap<>();
+
+    public Kernel(Problem problem, TermFactory terms) {
+        this.problem = problem;
+        this.terms = terms;
+        this.signature = new Signature(problem.signature());
+        for (Map.Entry<String, Formula> e : problem.axioms().entrySet()) {
+            axioms.put(e.getKey(), new Fact(this, e.getKey(), e.getValue(), null));
+        }
+    }
+
+    public TermFactory terms() {
+        return terms;
+    }
+
+    public Problem problem() {
+        return problem;
+    }
+
+    /** The signature as it stands after the steps accepted so far. */
+    public Signature signature() {
+        return signature;
+    }
+
+    /** The axiom of this name as a premise, or null. The goal is never a premise. */
+    public Fact axiom(String name) {
+        return axioms.get(name);
+    }
+
+    // ================================================================ formula rules
+
+    /** {@code negate G}: the conclusion is {@code not G} or {@code nnf(not G)}. */
+    public Outcome negate(String label, String goalName, Formula stated) {
+        final String rule = "negate";
+        Formula goal = problem.goal();
+        if (goal == null) return reject(rule, "the problem has no goal to negate", stated, null);
+        if (!problem.goalName().equals(goalName)) {
+            return reject(rule, goalName + " is not the problem's goal (" + problem.goalName() + ")", stated, null);
+        }
+        Outcome bad = unknownSymbols(rule, stated, null, null);
+        if (bad != null) return bad;
+        Formula not = new Formula.Not(goal);
+        if (Formulas.equivalent(stated, not)) return accept(label, stated);
+        Formula normal = Formulas.nnf(not);
+        if (Formulas.equivalent(stated, normal)) return accept(label, stated);
+        return rejectFormula(rule, "the conclusion is neither not " + problem.goalName() + " nor its negation normal form",
+                stated, normal);
+    }
+
+    /** {@code nnf P}: the conclusion is {@code nnf(P)}. */
+    public Outcome nnf(String label, Fact premise, Formula stated) {
+        final String rule = "nnf";
+        Outcome bad = requireFormula(rule, premise, stated);
+        if (bad != null) return bad;
+        bad = unknownSymbols(rule, stated, null, null);
+        if (bad != null) return bad;
+        Formula normal = Formulas.nnf(premise.formula());
+        if (Formulas.equivalent(stated, normal)) return accept(label, stated);
+        return rejectFormula(rule, "the conclusion is not the negation normal form of " + premise.label(), stated, normal);
+    }
+
+    /** {@code skolemize P fresh s1, …}. */
+    public Outcome skolemize(String label, Fact premise, List<Symbol> fresh, Formula stated) {
+        return notSupported("skolemize", stated);
+    }
+
+    /** {@code clausify P [θ]}: see {@link Clausification}; with θ absent the kernel searches for one. */
+    public Outcome clausify(String label, Fact premise, Substitution theta, Clause stated) {
+        final String rule = "clausify";
+        if (premise.owner() != this) return foreign(rule, premise);
+        if (premise.isClause()) {
+            return reject(rule, premise.label() + " is a clause step; clausify takes a formula", Printer.clause(stated), null);
+        }
+        Outcome bad = unknownSymbols(rule, null, stated, theta);
+        if (bad != null) return bad;
+        Formula normal = Formulas.nnf(premise.formula());
+        Formula m = Clausification.stripUniversals(normal);
+        if (m == null) {
+            return reject(rule, "the negation normal form of " + premise.label()
+                    + " still has an existential quantifier: skolemize it first", Printer.clause(stated),
+                    Printer.formula(normal));
+        }
+        Set<Literal> set = stated.asSet();
+        if (theta != null) {
+            Set<Variable> domainOk = Formulas.freeVariables(m);
+            for (Variable v : theta.bindings().keySet()) {
+                if (!domainOk.contains(v)) {
+                    return reject(rule, "the substitution binds " + v.name() + ", which is not a variable of "
+                            + premise.label(), Printer.clause(stated), null);
+                }
+            }
+            if (!Clausification.evaluate(m, theta, set)) return accept(label, stated);
+            return reject(rule, "with " + Printer.substitution(theta) + " and the literals of the conclusion false, "
+                    + premise.label() + " does not evaluate to false, so it does not entail the clause",
+                    Printer.clause(stated), Printer.formula(m));
+        }
+        if (!Clausification.evaluate(m, Substitution.empty(terms), set)) return accept(label, stated);
+        Clausification.Search found = Clausification.findTheta(terms, m, stated.literals());
+        if (found.theta() != null && !Clausification.evaluate(m, found.theta(), set)) return accept(label, stated);
+        String why = found.exhausted()
+                ? "no substitution was found within " + Clausification.SEARCH_BUDGET + " search steps; state one"
+                : "no substitution makes " + premise.label() + " false when the literals of the conclusion are false"
+                        + ", so the clause does not follow from it";
+        return reject(rule, why, Printer.clause(stated), Printer.formula(m));
+    }
+
+    /** {@code define fresh Q}. */
+    public Outcome define(String label, Symbol fresh, Formula stated) {
+        return notSupported("define", stated);
+    }
+
+    /** {@code abbreviate P using D}. */
+    public Outcome abbreviate(String label, Fact premise, Fact definition, Formula stated) {
+        return notSupported("abbreviate", stated);
+    }
+
+    // ================================================================ clause rules
+
+    /**
+     * {@code resolve A.i [σA], B.j [σB]}. With both substitutions null the kernel renames B apart and computes a
+     * most general unifier; with either given, a missing one is empty and the conclusion must be the resolvent itself.
+     */
+    public Outcome resolve(String label, Fact a, int i, Substitution sa, Fact b, int j, Substitution sb,
+                           Clause stated) {
+        final String rule = "resolve";
+        Outcome bad = requireClauses(rule, stated, a, b);
+        if (bad == null) bad = literalIndex(rule, a, i, stated);
+        if (bad == null) bad = literalIndex(rule, b, j, stated);
+        if (bad == null) bad = unknownSymbols(rule, null, stated, sa, sb);
+        if (bad != null) return bad;
+        Literal li = a.clause().literal(i);
+        Literal lj = b.clause().literal(j);
+        if (li.positive() == lj.positive()) {
+            return reject(rule, ref(a, i) + " and " + ref(b, j) + " have the same sign; resolution needs opposite signs",
+                    Printer.clause(stated), null);
+        }
+        if (sa != null || sb != null) {
+            Substitution ta = sa != null ? sa : Substitution.empty(terms);
+            Substitution tb = sb != null ? sb : Substitution.empty(terms);
+            bad = domain(rule, ta, a, stated);
+            if (bad == null) bad = domain(rule, tb, b, stated);
+            if (bad != null) return bad;
+            Literal ia = ta.apply(li).negated();
+            Literal ib = tb.apply(lj);
+            if (!ia.equals(ib)) {
+                return reject(rule, "under the stated substitutions " + ref(a, i) + " becomes " + Printer.literal(ta.apply(li))
+                        + " and " + ref(b, j) + " becomes " + Printer.literal(ib) + ": not the same atom",
+                        Printer.clause(stated), null);
+            }
+            Clause derived = union(ta.apply(remove(a.clause(), li)), tb.apply(remove(b.clause(), lj)));
+            return sameSet(rule, label, stated, derived);
+        }
+        Clause bApart = renameApart(b.clause());
+        Literal ljApart = bApart.literal(j);
+        Clause restA = remove(a.clause(), li);
+        Clause restB = remove(bApart, ljApart);
+        String failure = null;
+        Clause lastDerived = null;
+        for (Term[] pair : atomPairs(li, ljApart)) {
+            Unification.Result r = Unification.mostGeneralUnifier(terms, pair[0], pair[1]);
+            if (r instanceof Unification.Unified u) {
+                Clause derived = union(u.unifier().apply(restA), u.unifier().apply(restB));
+                if (Variants.areVariants(stated, derived, Variants.DEFAULT_BUDGET)) return accept(label, stated);
+                if (lastDerived == null) lastDerived = derived;
+            } else if (failure == null) {
+                failure = ((Unification.NotUnifiable) r).describe();
+            }
+        }
+        if (lastDerived != null) return notVariant(rule, stated, lastDerived);
+        return reject(rule, "the atoms of " + ref(a, i) + " and " + ref(b, j) + ", " + Printer.term(li.atom())
+                + " and " + Printer.term(lj.atom()) + ", do not unify: " + failure, Printer.clause(stated), null);
+    }
+
+    /** {@code factor A.i, A.j [σ]}. */
+    public Outcome factor(String label, Fact a, int i, int j, Substitution sigma, Clause stated) {
+        final String rule = "factor";
+        Outcome bad = requireClauses(rule, stated, a);
+        if (bad == null) bad = literalIndex(rule, a, i, stated);
+        if (bad == null) bad = literalIndex(rule, a, j, stated);
+        if (bad == null) bad = unknownSymbols(rule, null, stated, sigma);
+        if (bad != null) return bad;
+        if (i == j) return reject(rule, "factoring needs two different literals, not " + ref(a, i) + " twice",
+                Printer.clause(stated), null);
+        Literal li = a.clause().literal(i);
+        Literal lj = a.clause().literal(j);
+        if (li.positive() != lj.positive()) {
+            return reject(rule, ref(a, i) + " and " + ref(a, j) + " have opposite signs; factoring needs the same sign",
+                    Printer.clause(stated), null);
+        }
+        if (sigma != null) {
+            bad = domain(rule, sigma, a, stated);
+            if (bad != null) return bad;
+            if (!sigma.apply(li).equals(sigma.apply(lj))) {
+                return reject(rule, "under " + Printer.substitution(sigma) + " the literals become "
+                        + Printer.literal(sigma.apply(li)) + " and " + Printer.literal(sigma.apply(lj))
+                        + ": not equal", Printer.clause(stated), null);
+            }
+            return sameSet(rule, label, stated, sigma.apply(a.clause()));
+        }
+        String failure = null;
+        Clause lastDerived = null;
+        for (Term[] pair : atomPairs(li, lj)) {
+            Unification.Result r = Unification.mostGeneralUnifier(terms, pair[0], pair[1]);
+            if (r instanceof Unification.Unified u) {
+                Clause derived = u.unifier().apply(a.clause());
+                if (Variants.areVariants(stated, derived, Variants.DEFAULT_BUDGET)) return accept(label, stated);
+                if (lastDerived == null) lastDerived = derived;
+            } else if (failure == null) {
+                failure = ((Unification.NotUnifiable) r).describe();
+            }
+        }
+        if (lastDerived != null) return notVariant(rule, stated, lastDerived);
+        return reject(rule, ref(a, i) + " and " + ref(a, j) + " do not unify: " + failure, Printer.clause(stated), null);
+    }
+
+    /** {@code instantiate A σ}: the conclusion is {@code Aσ}. */
+    public Outcome instantiate(String label, Fact a, Substitution sigma, Clause stated) {
+        final String rule = "instantiate";
+        Outcome bad = requireClauses(rule, stated, a);
+        if (bad == null) bad = unknownSymbols(rule, null, stated, sigma);
+        if (bad == null) bad = domain(rule, sigma, a, stated);
+        if (bad != null) return bad;
+        return sameSet(rule, label, stated, sigma.apply(a.clause()));
+    }
+
+    /** {@code paramodulate A.i -> B.j @ p [σA] [σB]}, or {@code <-}. */
+    public Outcome paramodulate(String label, Fact a, int i, boolean leftToRight, Fact b, int j, int[] position,
+                                Substitution sa, Substitution sb, Clause stated) {
+        return notSupported("paramodulate", stated);
+    }
+
+    /** {@code eqres A.i [σ]}. */
+    public Outcome eqres(String label, Fact a, int i, Substitution sigma, Clause stated) {
+        return notSupported("eqres", stated);
+    }
+
+    /** {@code eqfactor A.i, A.j [σ]}. */
+    public Outcome eqfactor(String label, Fact a, int i, int j, Substitution sigma, Clause stated) {
+        return notSupported("eqfactor", stated);
+    }
+
+    /** {@code reflexivity}: the conclusion is {@code t = t}. */
+    public Outcome reflexivity(String label, Clause stated) {
+        return notSupported("reflexivity", stated);
+    }
+
+    // ================================================================ helpers
+
+    private Outcome accept(String label, Formula f) {
+        return new Outcome.Accepted(new Fact(this, label, f, null));
+    }
+
+    private Outcome accept(String label, Clause c) {
+        return new Outcome.Accepted(new Fact(this, label, null, c));
+    }
+
+    private static Outcome reject(String rule, String reason, String stated, String derived) {
+        return new Outcome.Rejected(rule, reason, stated, derived);
+    }
+
+    private static Outcome reject(String rule, String reason, Formula stated, String derived) {
+        return new Outcome.Rejected(rule, reason, stated == null ? null : Printer.formula(stated), derived);
+    }
+
+    private static Outcome rejectFormula(String rule, String reason, Formula stated, Formula derived) {
+        return new Outcome.Rejected(rule, reason, Printer.formula(stated), Printer.formula(derived));
+    }
+
+    private static Outcome notSupported(String rule, Object stated) {
+        String s = stated instanceof Clause c ? Printer.clause(c) : Printer.formula((Formula) stated);
+        return new Outcome.Rejected(rule, "the rule " + rule + " is not supported yet by this checker", s, null);
+    }
+
+    private static Outcome foreign(String rule, Fact f) {
+        return new Outcome.Rejected(rule, "premise " + f.label() + " belongs to another check", null, null);
+    }
+
+    private static String ref(Fact f, int i) {
+        return f.label() + "." + i;
+    }
+
+    private Outcome requireFormula(String rule, Fact premise, Formula stated) {
+        if (premise.owner() != this) return foreign(rule, premise);
+        if (premise.isClause()) {
+            return reject(rule, premise.label() + " is a clause step; " + rule + " takes a formula", stated, null);
+        }
+        return null;
+    }
+
+    private Outcome requireClauses(String rule, Clause stated, Fact... premises) {
+        for (Fact p : premises) {
+            if (p.owner() != this) return foreign(rule, p);
+            if (!p.isClause()) {
+                return reject(rule, p.label() + " is a formula; " + rule + " takes clause steps (clausify it first)",
+                        Printer.clause(stated), null);
+            }
+        }
+        return null;
+    }
+
+    private static Outcome literalIndex(String rule, Fact f, int i, Clause stated) {
+        if (f.clause().literal(i) != null) return null;
+        return reject(rule, f.label() + " has " + f.clause().width() + " literal" + (f.clause().width() == 1 ? "" : "s")
+                + ", so there is no literal " + i, Printer.clause(stated), null);
+    }
+
+    private static Outcome domain(String rule, Substitution s, Fact f, Clause stated) {
+        if (s.isEmpty()) return null;
+        List<Variable> vars = f.clause().variables();
+        for (Variable v : s.bindings().keySet()) {
+            if (!vars.contains(v)) {
+                return reject(rule, "the substitution binds " + v.name() + ", which is not a variable of " + f.label(),
+                        Printer.clause(stated), null);
+            }
+        }
+        return null;
+    }
+
+    /**
+     * Every symbol of a stated conclusion or substitution must be in the signature as it stands; this is what makes
+     * the freshness of a later Skolem or definition symbol meaningful.
+     */
+    private Outcome unknownSymbols(String rule, Formula f, Clause c, Substitution... subs) {
+        Set<Symbol> used = new LinkedHashSet<>();
+        if (f != null) used.addAll(Formulas.symbols(f));
+        if (c != null) for (Literal l : c.literals()) Formulas.collectSymbols(l.atom(), used);
+        for (Substitution s : subs) {
+            if (s != null) for (Term t : s.bindings().values()) Formulas.collectSymbols(t, used);
+        }
+        for (Symbol s : used) {
+            if (!signature.admits(s)) {
+                Symbol known = signature.lookup(s.name());
+                String why = known == null ? "the symbol " + s + " is not in the signature"
+                        : "the symbol " + s.name() + " is used as " + s + " but is " + known;
+                return new Outcome.Rejected(rule, why, f != null ? Printer.formula(f) : c != null ? Printer.clause(c) : null, null);
+            }
+        }
+        return null;
+    }
+
+    private Outcome sameSet(String rule, String label, Clause stated, Clause derived) {
+        if (stated.sameSet(derived)) return accept(label, stated);
+        return reject(rule, difference(stated, derived), Printer.clause(stated), Printer.clause(derived));
+    }
+
+    private Outcome notVariant(String rule, Clause stated, Clause derived) {
+        return reject(rule, "the conclusion is not a variant of the derived clause" + hint(stated, derived),
+                Printer.clause(stated), Printer.clause(derived));
+    }
+
+    private static String hint(Clause stated, Clause derived) {
+        int s = stated.asSet().size();
+        int d = derived.asSet().size();
+        if (s != d) return " (" + s + " distinct literal" + (s == 1 ? "" : "s") + " stated, " + d + " derived)";
+        return "";
+    }
+
+    private static String difference(Clause stated, Clause derived) {
+        List<String> extra = new ArrayList<>();
+        List<String> missing = new ArrayList<>();
+        for (Literal l : stated.asSet()) if (!derived.asSet().contains(l)) extra.add(Printer.literal(l, 200));
+        for (Literal l : derived.asSet()) if (!stated.asSet().contains(l)) missing.add(Printer.literal(l, 200));
+        StringBuilder sb = new StringBuilder("the conclusion differs from the derived clause");
+        if (!extra.isEmpty()) sb.append(": stated but not derived ").append(String.join(", ", extra));
+        if (!missing.isEmpty()) sb.append(extra.isEmpty() ? ": " : "; ").append("derived but not stated ")
+                .append(String.join(", ", missing));
+        return sb.toString();
+    }
+
+    /** The clause without every occurrence of {@code l} (a clause is a set). */
+    private static Clause remove(Clause c, Literal l) {
+        List<Literal> out = new ArrayList<>(c.width());
+        for (Literal x : c.literals()) if (!x.equals(l)) out.add(x);
+        return new Clause(out);
+    }
+
+    private static Clause union(Clause x, Clause y) {
+        List<Literal> out = new ArrayList<>(x.literals());
+        out.addAll(y.literals());
+        return new Clause(out);
+    }
+
+    /** The ways two atoms can be set equal: as written, and for two equations also with one side swapped. */
+    private List<Term[]> atomPairs(Literal x, Literal y) {
+        List<Term[]> out = new ArrayList<>(2);
+        out.add(new Term[] {x.atom(), y.atom()});
+        if (x.isEquation() && y.isEquation()) {
+            out.add(new Term[] {x.atom(), terms.equation(y.right(), y.left())});
+        }
+        return out;
+    }
+
+    /** B with every variable replaced by a fresh one, so that it shares none with any parsed clause. */
+    Clause renameApart(Clause c) {
+        Map<Variable, Term> fresh = new HashMap<>();
+        for (Variable v : c.variables()) fresh.put(v, terms.freshVariable(v.name()));
+        return new Substitution(terms, fresh).apply(c);
+    }
+}

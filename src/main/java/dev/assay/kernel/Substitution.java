@@ -1,0 +1,110 @@
+package dev.assay.kernel;
+
+import java.util.ArrayDeque;
+import java.util.ArrayList;
+import java.util.Collections;
+import java.util.HashMap;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * A finite map from variables to terms, applied simultaneously. Application memoises on the shared term graph,
+ * so applying a most general unifier in triangular or solved form costs the size of the graph, not of the tree.
+ */
+public final class Substitution {
+
+    private final TermFactory terms;
+    private final LinkedHashMap<Variable, Term> bindings;
+
+    public Substitution(TermFactory terms, Map<Variable, Term> bindings) {
+        this.terms = terms;
+        this.bindings = new LinkedHashMap<>(bindings);
+    }
+
+    public static Substitution empty(TermFactory terms) {
+        return new Substitution(terms, Map.of());
+    }
+
+    public Map<Variable, Term> bindings() {
+        return Collections.unmodifiableMap(bindings);
+    }
+
+    public boolean isEmpty() {
+        return bindings.isEmpty();
+    }
+
+    public Term get(Variable v) {
+        return bindings.get(v);
+    }
+
+    public Term apply(Term root) {
+        if (bindings.isEmpty() || root.isGround()) return root;
+        return apply(root, new HashMap<>());
+    }
+
+    /** Applies to {@code root}, sharing {@code memo} across calls on the same substitution. */
+    Term apply(Term root, Map<Term, Term> memo) {
+        if (bindings.isEmpty() || root.isGround()) return root;
+        Term done = memo.get(root);
+        if (done != null) return done;
+        // Post-order over the graph: a node is rebuilt once all its arguments are.
+        ArrayDeque<Term> stack = new ArrayDeque<>();
+        stack.push(root);
+        while (!stack.isEmpty()) {
+            Term t = stack.peek();
+            if (memo.containsKey(t)) {
+                stack.pop();
+                continue;
+            }
+            if (t.isGround()) {
+                memo.put(t, t);
+                stack.pop();
+                continue;
+            }
+            if (t instanceof Variable v) {
+                Term b = bindings.get(v);
+                memo.put(t, b == null ? v : b);
+                stack.pop();
+                continue;
+            }
+            Application a = (Application) t;
+            Term[] args = a.argumentArray();
+            boolean ready = true;
+            for (int i = args.length - 1; i >= 0; i--) {
+                if (!memo.containsKey(args[i])) {
+                    stack.push(args[i]);
+                    ready = false;
+                }
+            }
+            if (!ready) continue;
+            stack.pop();
+            Term[] mapped = new Term[args.length];
+            boolean changed = false;
+            for (int i = 0; i < args.length; i++) {
+                mapped[i] = memo.get(args[i]);
+                changed |= mapped[i] != args[i];
+            }
+            memo.put(a, changed ? terms.application(a.symbol(), mapped) : a);
+        }
+        return memo.get(root);
+    }
+
+    public Literal apply(Literal l) {
+        if (bindings.isEmpty()) return l;
+        return new Literal(l.positive(), (Application) apply(l.atom()));
+    }
+
+    public Clause apply(Clause c) {
+        if (bindings.isEmpty()) return c;
+        Map<Term, Term> memo = new HashMap<>();
+        List<Literal> out = new ArrayList<>(c.width());
+        for (Literal l : c.literals()) out.add(new Literal(l.positive(), (Application) apply(l.atom(), memo)));
+        return new Clause(out);
+    }
+
+    @Override
+    public String toString() {
+        return Printer.substitution(this);
+    }
+}

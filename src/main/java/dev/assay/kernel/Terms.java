@@ -1,0 +1,63 @@
+package dev.assay.kernel;
+
+import java.util.ArrayDeque;
+import java.util.Collections;
+import java.util.IdentityHashMap;
+import java.util.Set;
+import java.util.function.Consumer;
+
+/** Iterative traversals of term graphs: each shared subterm is visited once, and no recursion grows with depth. */
+final class Terms {
+
+    private Terms() {
+    }
+
+    /** Visits every distinct subterm of {@code root} once, parents before children. */
+    static void forEachSubterm(Term root, Consumer<Term> visitor) {
+        Set<Term> seen = Collections.newSetFromMap(new IdentityHashMap<>());
+        ArrayDeque<Term> stack = new ArrayDeque<>();
+        stack.push(root);
+        while (!stack.isEmpty()) {
+            Term t = stack.pop();
+            if (!seen.add(t)) continue;
+            visitor.accept(t);
+            if (t instanceof Application a) {
+                Term[] args = a.argumentArray();
+                for (int i = args.length - 1; i >= 0; i--) stack.push(args[i]);
+            }
+        }
+    }
+
+    /** Adds the variables of {@code root} to {@code into}, in left-to-right order of first occurrence. */
+    static void collectVariables(Term root, Set<Variable> into) {
+        if (root.isGround()) return;
+        Set<Term> seen = Collections.newSetFromMap(new IdentityHashMap<>());
+        ArrayDeque<Term> stack = new ArrayDeque<>();
+        stack.push(root);
+        while (!stack.isEmpty()) {
+            Term t = stack.pop();
+            if (t.isGround() || !seen.add(t)) continue;
+            if (t instanceof Variable v) {
+                into.add(v);
+            } else {
+                Term[] args = ((Application) t).argumentArray();
+                for (int i = args.length - 1; i >= 0; i--) stack.push(args[i]);
+            }
+        }
+    }
+
+    /** Whether {@code v} occurs in {@code t}. */
+    static boolean occurs(Variable v, Term t) {
+        if (t.isGround()) return false;
+        Set<Term> seen = Collections.newSetFromMap(new IdentityHashMap<>());
+        ArrayDeque<Term> stack = new ArrayDeque<>();
+        stack.push(t);
+        while (!stack.isEmpty()) {
+            Term s = stack.pop();
+            if (s == v) return true;
+            if (s.isGround() || !seen.add(s)) continue;
+            if (s instanceof Application a) for (Term arg : a.argumentArray()) stack.push(arg);
+        }
+        return false;
+    }
+}
