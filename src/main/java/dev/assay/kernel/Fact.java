@@ -10,13 +10,28 @@ public final class Fact {
     private final String label;
     private final Formula formula;
     private final Clause clause;
+    private final Definition definition;
+
+    /** What a {@code define} step established: {@code forall params. (symbol(params) iff body)}. */
+    record Definition(Symbol symbol, java.util.List<Variable> parameters, Formula body) {
+    }
 
     Fact(Kernel owner, String label, Formula formula, Clause clause) {
+        this(owner, label, formula, clause, null);
+    }
+
+    Fact(Kernel owner, String label, Formula formula, Clause clause, Definition definition) {
         if ((formula == null) == (clause == null)) throw new IllegalArgumentException("formula xor clause");
         this.owner = owner;
         this.label = label;
         this.formula = formula;
         this.clause = clause;
+        this.definition = definition;
+    }
+
+    /** The definition a {@code define} step made, or null. */
+    Definition definition() {
+        return definition;
     }
 
     Kernel owner() {

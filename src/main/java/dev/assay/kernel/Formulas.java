@@ -112,6 +112,49 @@ public final class Formulas {
         return and ? new Formula.And(flat) : new Formula.Or(flat);
     }
 
+    /**
+     * The same formula with nested junctions of one kind flattened and {@code not} of an atom or constant folded into
+     * it; everything else is kept.
+     */
+    static Formula normalizeJunctions(Formula root) {
+        ArrayDeque<Object> work = new ArrayDeque<>();
+        ArrayList<Formula> results = new ArrayList<>();
+        work.push(root);
+        while (!work.isEmpty()) {
+            Object item = work.pop();
+            if (item instanceof Rebuild r) {
+                Formula f = r.formula();
+                if (f instanceof Formula.Quantified q) {
+                    results.add(new Formula.Quantified(q.universal(), q.variable(), results.remove(results.size() - 1)));
+                } else if (f instanceof Formula.Not) {
+                    Formula body = results.remove(results.size() - 1);
+                    if (body instanceof Formula.Atomic a) results.add(new Formula.Atomic(a.literal().negated()));
+                    else if (body instanceof Formula.Constant c) results.add(Formula.Constant.of(!c.value()));
+                    else results.add(new Formula.Not(body));
+                } else if (f instanceof Formula.Junction j) {
+                    int n = j.parts().size();
+                    List<Formula> parts = new ArrayList<>(results.subList(results.size() - n, results.size()));
+                    results.subList(results.size() - n, results.size()).clear();
+                    results.add(junction(j instanceof Formula.And, parts));
+                } else {
+                    Formula right = results.remove(results.size() - 1);
+                    Formula left = results.remove(results.size() - 1);
+                    results.add(f instanceof Formula.Implies ? new Formula.Implies(left, right) : new Formula.Iff(left, right));
+                }
+                continue;
+            }
+            Formula f = (Formula) item;
+            List<Formula> cs = children(f);
+            if (cs.isEmpty()) {
+                results.add(f);
+                continue;
+            }
+            work.push(new Rebuild(f, null));
+            for (int i = cs.size() - 1; i >= 0; i--) work.push(cs.get(i));
+        }
+        return results.get(0);
+    }
+
     // ---------------------------------------------------------------- comparison
 
     /**
@@ -363,6 +406,72 @@ public final class Formulas {
         Terms.forEachSubterm(t, s -> {
             if (s instanceof Application a && !a.isEquation()) into.add(a.symbol());
         });
+    }
+
+    private record Rebuild(Formula formula, Variable unbind) {
+    }
+
+    /**
+     * Rebuilds {@code root} with {@code substitution} applied to its free variables and every bound variable renamed
+     * to a fresh one, so that no term of the substitution can be captured. {@code atoms}, when not null, may replace
+     * a literal (after substitution) by a formula; returning null keeps the literal.
+     */
+    static Formula substitute(Formula root, TermFactory terms, Map<Variable, Term> substitution,
+                              java.util.function.Function<Literal, Formula> atoms) {
+        Map<Variable, ArrayDeque<Term>> env = new HashMap<>();
+        for (Map.Entry<Variable, Term> e : substitution.entrySet()) {
+            env.computeIfAbsent(e.getKey(), k -> new ArrayDeque<>()).push(e.getValue());
+        }
+        ArrayDeque<Object> work = new ArrayDeque<>();
+        ArrayList<Formula> results = new ArrayList<>();
+        work.push(root);
+        while (!work.isEmpty()) {
+            Object item = work.pop();
+            if (item instanceof Rebuild r) {
+                Formula f = r.formula;
+                if (f instanceof Formula.Quantified q) {
+                    Formula body = results.remove(results.size() - 1);
+                    Variable fresh = (Variable) env.get(q.variable()).pop();
+                    results.add(new Formula.Quantified(q.universal(), fresh, body));
+                } else if (f instanceof Formula.Not) {
+                    results.add(new Formula.Not(results.remove(results.size() - 1)));
+                } else if (f instanceof Formula.Junction j) {
+                    int n = j.parts().size();
+                    List<Formula> parts = new ArrayList<>(results.subList(results.size() - n, results.size()));
+                    results.subList(results.size() - n, results.size()).clear();
+                    results.add(j instanceof Formula.And ? new Formula.And(parts) : new Formula.Or(parts));
+                } else {
+                    Formula right = results.remove(results.size() - 1);
+                    Formula left = results.remove(results.size() - 1);
+                    results.add(f instanceof Formula.Implies ? new Formula.Implies(left, right) : new Formula.Iff(left, right));
+                }
+                continue;
+            }
+            Formula f = (Formula) item;
+            if (f instanceof Formula.Atomic a) {
+                Map<Variable, Term> current = new HashMap<>();
+                Set<Variable> vs = new LinkedHashSet<>();
+                Terms.collectVariables(a.literal().atom(), vs);
+                for (Variable v : vs) {
+                    ArrayDeque<Term> d = env.get(v);
+                    if (d != null && !d.isEmpty()) current.put(v, d.peek());
+                }
+                Literal l = new Substitution(terms, current).apply(a.literal());
+                Formula replaced = atoms == null ? null : atoms.apply(l);
+                results.add(replaced != null ? replaced : l == a.literal() ? a : new Formula.Atomic(l));
+            } else if (f instanceof Formula.Constant) {
+                results.add(f);
+            } else if (f instanceof Formula.Quantified q) {
+                env.computeIfAbsent(q.variable(), k -> new ArrayDeque<>()).push(terms.freshVariable(q.variable().name()));
+                work.push(new Rebuild(f, q.variable()));
+                work.push(q.body());
+            } else {
+                work.push(new Rebuild(f, null));
+                List<Formula> cs = children(f);
+                for (int i = cs.size() - 1; i >= 0; i--) work.push(cs.get(i));
+            }
+        }
+        return results.get(0);
     }
 
     /** The number of nodes, for limits and reports. */

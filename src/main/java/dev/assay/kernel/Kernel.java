@@ -65,7 +65,7 @@ public final class Kernel {
         if (!problem.goalName().equals(goalName)) {
             return reject(rule, goalName + " is not the problem's goal (" + problem.goalName() + ")", stated, null);
         }
-        Outcome bad = unknownSymbols(rule, stated, null, null);
+        Outcome bad = unknownSymbols(rule, stated, null);
         if (bad != null) return bad;
         Formula not = new Formula.Not(goal);
         if (Formulas.equivalent(stated, not)) return accept(label, stated);
@@ -80,16 +80,42 @@ public final class Kernel {
         final String rule = "nnf";
         Outcome bad = requireFormula(rule, premise, stated);
         if (bad != null) return bad;
-        bad = unknownSymbols(rule, stated, null, null);
+        bad = unknownSymbols(rule, stated, null);
         if (bad != null) return bad;
         Formula normal = Formulas.nnf(premise.formula());
         if (Formulas.equivalent(stated, normal)) return accept(label, stated);
         return rejectFormula(rule, "the conclusion is not the negation normal form of " + premise.label(), stated, normal);
     }
 
-    /** {@code skolemize P fresh s1, …}. */
+    /**
+     * {@code skolemize P fresh s1, …}: the conclusion is {@code nnf(P)} with some existentials replaced by terms of
+     * the fresh symbols over the universal variables enclosing them (see {@link Skolemization}). Replacing
+     * {@code exists y. φ} under {@code forall x1 … xk} by {@code φ[y := s(x1,…,xk)]} with a fresh s preserves
+     * satisfiability: every model of the premise extends to one of the conclusion by interpreting s as a choice
+     * function.
+     */
     public Outcome skolemize(String label, Fact premise, List<Symbol> fresh, Formula stated) {
-        return notSupported("skolemize", stated);
+        final String rule = "skolemize";
+        Outcome bad = requireFormula(rule, premise, stated);
+        if (bad != null) return bad;
+        Signature extended = new Signature(signature);
+        for (Symbol s : fresh) {
+            if (s.kind() != Symbol.Kind.FUNCTION) {
+                return reject(rule, s.name() + " is used as a predicate; a Skolem symbol is a function", stated, null);
+            }
+            bad = notFresh(rule, s, stated);
+            if (bad != null) return bad;
+            if (extended.lookup(s.name()) != null) return reject(rule, s.name() + " is listed twice", stated, null);
+            extended.add(s, Signature.Origin.SKOLEM, label);
+        }
+        bad = symbolsOutside(rule, stated, null, extended);
+        if (bad != null) return bad;
+        String why = Skolemization.check(premise.formula(), premise.label(), fresh, stated);
+        if (why != null) {
+            return rejectFormula(rule, why, stated, Formulas.nnf(premise.formula()));
+        }
+        for (Symbol s : fresh) signature.add(s, Signature.Origin.SKOLEM, label);
+        return accept(label, stated);
     }
 
     /** {@code clausify P [θ]}: see {@link Clausification}; with θ absent the kernel searches for one. */
@@ -132,14 +158,102 @@ public final class Kernel {
         return reject(rule, why, Printer.clause(stated), Printer.formula(m));
     }
 
-    /** {@code define fresh Q}. */
+    /**
+     * {@code define fresh Q}: the conclusion is {@code forall x1 … xk. (Q(x1,…,xk) iff φ)} with Q fresh, not in φ,
+     * and the distinct {@code xi} holding every free variable of φ. A definition of a fresh symbol is a conservative
+     * extension, so it is sound to add as a fact.
+     */
     public Outcome define(String label, Symbol fresh, Formula stated) {
-        return notSupported("define", stated);
+        final String rule = "define";
+        if (fresh.kind() != Symbol.Kind.PREDICATE) {
+            return reject(rule, fresh.name() + " must be defined as a predicate", stated, null);
+        }
+        Outcome bad = notFresh(rule, fresh, stated);
+        if (bad != null) return bad;
+        List<Variable> params = new ArrayList<>();
+        Formula f = stated;
+        while (f instanceof Formula.Quantified q && q.universal()) {
+            params.add(q.variable());
+            f = q.body();
+        }
+        // forall x. (Q(x) iff forall y. ...) peels too far only if the iff is not directly below the prefix.
+        if (!(f instanceof Formula.Iff iff)) {
+            return reject(rule, "a definition has the form forall x1 … xk. (" + fresh.name() + "(x1, …, xk) iff φ)",
+                    stated, null);
+        }
+        if (!(iff.left() instanceof Formula.Atomic head) || !head.literal().positive()
+                || !head.literal().atom().symbol().equals(fresh)) {
+            return reject(rule, "the left side of the definition must be the atom " + fresh.name() + "(…) itself",
+                    stated, null);
+        }
+        Application atom = head.literal().atom();
+        if (atom.arity() != params.size()) {
+            return reject(rule, fresh.name() + " has " + atom.arity() + " arguments but the definition quantifies "
+                    + params.size() + " variables", stated, null);
+        }
+        for (int k = 0; k < atom.arity(); k++) {
+            if (atom.argument(k) != params.get(k)) {
+                return reject(rule, "argument " + (k + 1) + " of " + fresh.name() + " must be the quantified variable "
+                        + params.get(k).name() + ", not " + Printer.term(atom.argument(k)), stated, null);
+            }
+            if (params.indexOf(params.get(k)) != k) {
+                return reject(rule, "the variable " + params.get(k).name() + " is quantified twice", stated, null);
+            }
+        }
+        Formula body = iff.right();
+        if (Formulas.symbols(body).contains(fresh)) {
+            return reject(rule, fresh.name() + " occurs in its own definition", stated, null);
+        }
+        Set<Variable> free = Formulas.freeVariables(body);
+        for (Variable v : free) {
+            if (!params.contains(v)) {
+                return reject(rule, "the variable " + v.name() + " is free in the body but is not an argument of "
+                        + fresh.name(), stated, null);
+            }
+        }
+        Signature extended = new Signature(signature);
+        extended.add(fresh, Signature.Origin.DEFINITION, label);
+        bad = symbolsOutside(rule, stated, null, extended);
+        if (bad != null) return bad;
+        signature.add(fresh, Signature.Origin.DEFINITION, label);
+        return new Outcome.Accepted(new Fact(this, label, stated, null, new Fact.Definition(fresh, params, body)));
     }
 
-    /** {@code abbreviate P using D}. */
+    /**
+     * {@code abbreviate P using D}: replacing every atom {@code Q(t1,…,tk)} of the conclusion by
+     * {@code φ[x1 := t1, …]} (bound variables of φ renamed apart, so nothing is captured) gives the premise.
+     */
     public Outcome abbreviate(String label, Fact premise, Fact definition, Formula stated) {
-        return notSupported("abbreviate", stated);
+        final String rule = "abbreviate";
+        Outcome bad = requireFormula(rule, premise, stated);
+        if (bad == null) bad = requireFormula(rule, definition, stated);
+        if (bad != null) return bad;
+        Fact.Definition d = definition.definition();
+        if (d == null) return reject(rule, definition.label() + " is not a define step", stated, null);
+        bad = unknownSymbols(rule, stated, null);
+        if (bad != null) return bad;
+        Formula unfolded = unfold(stated, d);
+        if (Formulas.equivalent(unfolded, premise.formula())) return accept(label, stated);
+        return rejectFormula(rule, "unfolding " + d.symbol().name() + " in the conclusion does not give " + premise.label(),
+                stated, unfolded);
+    }
+
+    private Formula unfold(Formula f, Fact.Definition d) {
+        return Formulas.substitute(f, terms, Map.of(), l -> {
+            if (!l.atom().symbol().equals(d.symbol())) return null;
+            Map<Variable, Term> args = new HashMap<>();
+            for (int k = 0; k < d.parameters().size(); k++) args.put(d.parameters().get(k), l.atom().argument(k));
+            Formula body = Formulas.substitute(d.body(), terms, args, null);
+            return l.positive() ? body : new Formula.Not(body);
+        });
+    }
+
+    private Outcome notFresh(String rule, Symbol s, Formula stated) {
+        Signature.Entry e = signature.entry(s.name());
+        if (e == null) return null;
+        String where = e.origin() == Signature.Origin.PROBLEM ? "it is a symbol of the problem"
+                : "step " + e.step() + " already introduced it";
+        return reject(rule, s.name() + " is not fresh: " + where, stated, null);
     }
 
     // ================================================================ clause rules
@@ -349,10 +463,14 @@ public final class Kernel {
      * the freshness of a later Skolem or definition symbol meaningful.
      */
     private Outcome unknownSymbols(String rule, Formula f, Clause c, Substitution... subs) {
+        return symbolsOutside(rule, f, c, signature, subs);
+    }
+
+    private Outcome symbolsOutside(String rule, Formula f, Clause c, Signature signature, Substitution... subs) {
         Set<Symbol> used = new LinkedHashSet<>();
         if (f != null) used.addAll(Formulas.symbols(f));
         if (c != null) for (Literal l : c.literals()) Formulas.collectSymbols(l.atom(), used);
-        for (Substitution s : subs) {
+        for (Substitution s : subs == null ? new Substitution[0] : subs) {
             if (s != null) for (Term t : s.bindings().values()) Formulas.collectSymbols(t, used);
         }
         for (Symbol s : used) {

@@ -1,0 +1,506 @@
+package dev.assay.check;
+
+import dev.assay.kernel.Clause;
+import dev.assay.kernel.Fact;
+import dev.assay.kernel.Formula;
+import dev.assay.kernel.Kernel;
+import dev.assay.kernel.Outcome;
+import dev.assay.kernel.Problem;
+import dev.assay.kernel.Signature;
+import dev.assay.kernel.Substitution;
+import dev.assay.kernel.Symbol;
+import dev.assay.kernel.TermFactory;
+import dev.assay.kernel.Variable;
+import dev.assay.syntax.AbbreviateArgs;
+import dev.assay.syntax.CertificateHeader;
+import dev.assay.syntax.CertificateReader;
+import dev.assay.syntax.CertificateStatement;
+import dev.assay.syntax.ClausifyArgs;
+import dev.assay.syntax.DefineArgs;
+import dev.assay.syntax.Digest;
+import dev.assay.syntax.Direction;
+import dev.assay.syntax.EqfactorArgs;
+import dev.assay.syntax.EqresArgs;
+import dev.assay.syntax.FactorArgs;
+import dev.assay.syntax.Forget;
+import dev.assay.syntax.InputError;
+import dev.assay.syntax.InstantiateArgs;
+import dev.assay.syntax.LiteralRef;
+import dev.assay.syntax.Location;
+import dev.assay.syntax.Name;
+import dev.assay.syntax.NegateArgs;
+import dev.assay.syntax.NnfArgs;
+import dev.assay.syntax.ParamodulateArgs;
+import dev.assay.syntax.ProblemReader;
+import dev.assay.syntax.RawClause;
+import dev.assay.syntax.RawConclusion;
+import dev.assay.syntax.RawFormula;
+import dev.assay.syntax.RawSubstitution;
+import dev.assay.syntax.ReflexivityArgs;
+import dev.assay.syntax.Resolver;
+import dev.assay.syntax.ResolveArgs;
+import dev.assay.syntax.RuleArgs;
+import dev.assay.syntax.SkolemizeArgs;
+import dev.assay.syntax.Step;
+import dev.assay.syntax.StepProblem;
+
+import java.io.IOException;
+import java.io.InputStream;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.security.DigestInputStream;
+import java.security.MessageDigest;
+import java.security.NoSuchAlgorithmException;
+import java.util.ArrayDeque;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.HashSet;
+import java.util.LinkedHashMap;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+
+/**
+ * Runs a certificate through the kernel: reads both files, resolves names, checks labels and premise order,
+ * passes every step to its kernel rule, and works out the verdict from the cone of the first empty clause.
+ */
+public final class Checker {
+
+    /** Rules in the order reports list them. */
+    public static final List<String> RULES = List.of("negate", "nnf", "skolemize", "clausify", "define", "abbreviate",
+            "resolve", "factor", "instantiate", "paramodulate", "eqres", "eqfactor", "reflexivity");
+
+    public record Options(int maxDepth) {
+        public static Options defaults() {
+            return new Options(ProblemReader.DEFAULT_MAX_DEPTH);
+        }
+    }
+
+    private final Options options;
+
+    public Checker(Options options) {
+        this.options = options;
+    }
+
+    public Checker() {
+        this(Options.defaults());
+    }
+
+    /** A failure that ends the check with the given verdict. */
+    private static final class Stop extends Exception {
+        final Verdict verdict;
+        final Failure failure;
+
+        Stop(Verdict verdict, Failure failure) {
+            super(failure.reason(), null, false, false);
+            this.verdict = verdict;
+            this.failure = failure;
+        }
+    }
+
+    /** What the check tracks per step for the cone. */
+    private record Node(String label, String rule, List<String> premises) {
+    }
+
+    public CheckResult check(Path problemPath, Path certificatePath) {
+        long start = System.nanoTime();
+        State st = new State(problemPath.toString(), certificatePath.toString());
+        try {
+            st.run(problemPath, certificatePath);
+        } catch (Stop s) {
+            st.verdict = s.verdict;
+            st.failure = s.failure;
+        }
+        long ms = (System.nanoTime() - start) / 1_000_000;
+        return st.result(ms);
+    }
+
+    private final class State {
+        final String problemFile;
+        final String certificateFile;
+        String problemSha;
+        String certificateSha;
+        String problemName;
+        String digest;
+        Verdict verdict;
+        Failure failure;
+        Kernel kernel;
+        Problem problem;
+        Resolver resolver;
+        final Map<String, Fact> facts = new HashMap<>();
+        final Map<String, Location> labels = new HashMap<>();
+        final Map<String, Location> forgotten = new HashMap<>();
+        final Map<String, Node> nodes = new HashMap<>();
+        final Map<String, Integer> byRule = new LinkedHashMap<>();
+        int steps;
+        String refutation;
+        List<String> used = List.of();
+        List<String> unused = List.of();
+        boolean goalUsed;
+        int coneSize;
+
+        State(String problemFile, String certificateFile) {
+            this.problemFile = problemFile;
+            this.certificateFile = certificateFile;
+        }
+
+        void run(Path problemPath, Path certificatePath) throws Stop {
+            byte[] problemBytes;
+            try {
+                problemBytes = Files.readAllBytes(problemPath);
+            } catch (IOException e) {
+                throw inputError(problemFile, "cannot read the problem file: " + describe(e));
+            }
+            problemSha = sha256(problemBytes);
+            TermFactory terms = new TermFactory();
+            resolver = new Resolver(terms);
+            try {
+                List<dev.assay.syntax.ProblemStatement> statements = new ArrayList<>();
+                try (ProblemReader reader = new ProblemReader(problemFile, new java.io.StringReader(
+                        new String(problemBytes, StandardCharsets.UTF_8)), options.maxDepth())) {
+                    for (var st = reader.next(); st != null; st = reader.next()) statements.add(st);
+                }
+                problem = resolver.problem(statements);
+            } catch (InputError e) {
+                throw inputError(e);
+            } catch (IOException e) {
+                throw inputError(problemFile, "cannot read the problem file: " + describe(e));
+            }
+            problemName = problem.name();
+            kernel = new Kernel(problem, terms);
+            MessageDigest md = newDigest();
+            try (InputStream in = new DigestInputStream(Files.newInputStream(certificatePath), md)) {
+                CertificateReader reader = new CertificateReader(certificateFile,
+                        new java.io.InputStreamReader(in, StandardCharsets.UTF_8), options.maxDepth());
+                boolean first = true;
+                Location last = new Location(certificateFile, 1, 1);
+                CertificateStatement s;
+                while (true) {
+                    try {
+                        s = reader.next();
+                    } catch (InputError e) {
+                        drain(in);
+                        certificateSha = hex(md.digest());
+                        throw inputError(e);
+                    }
+                    if (s == null) break;
+                    last = s.at();
+                    if (first) {
+                        first = false;
+                        if (!(s instanceof CertificateHeader h)) {
+                            throw inputError(s.at(), "a certificate starts with 'certificate for <problem name>'");
+                        }
+                        if (!h.problem().text().equals(problem.name())) {
+                            throw inputError(h.problem().at(), "this certificate is for problem " + h.problem().text()
+                                    + " but the problem file is " + problem.name());
+                        }
+                        continue;
+                    }
+                    statement(s);
+                }
+                certificateSha = hex(md.digest());
+                if (first) throw inputError(last, "the certificate is empty: it starts with 'certificate for <problem name>'");
+                finish(last);
+            } catch (IOException e) {
+                throw inputError(certificateFile, "cannot read the certificate file: " + describe(e));
+            }
+        }
+
+        void statement(CertificateStatement s) throws Stop {
+            if (s instanceof CertificateHeader h) {
+                throw inputError(h.at(), "a second 'certificate for' header");
+            } else if (s instanceof Digest d) {
+                if (steps > 0 || digest != null) throw inputError(d.at(), "the digest belongs right after the header");
+                if (!d.sha256().equalsIgnoreCase(problemSha)) {
+                    digest = "mismatch";
+                    throw inputError(d.at(), "the problem file does not match the certificate's digest: the file's"
+                            + " SHA-256 is " + problemSha + ", the digest says " + d.sha256().toLowerCase());
+                }
+                digest = "matched";
+            } else if (s instanceof Forget f) {
+                for (Name n : f.labels()) {
+                    if (!labels.containsKey(n.text())) {
+                        throw reject(n.at(), null, "forget", "forget names " + n.text() + ", which is not an earlier step");
+                    }
+                    facts.remove(n.text());
+                    forgotten.putIfAbsent(n.text(), n.at());
+                }
+            } else {
+                step((Step) s);
+            }
+        }
+
+        void step(Step s) throws Stop {
+            String label = s.label().text();
+            String rule = s.args().ruleName();
+            Location before = labels.get(label);
+            if (before != null) {
+                throw reject(s.label().at(), label, rule, "the label " + label + " is used twice (first at " + before + ")");
+            }
+            if (problem.axioms().containsKey(label) || label.equals(problem.goalName())) {
+                throw reject(s.label().at(), label, rule, "the label " + label + " is the name of a problem "
+                        + (label.equals(problem.goalName()) ? "goal" : "axiom"));
+            }
+            List<String> premises = new ArrayList<>();
+            Outcome o;
+            try {
+                o = apply(s, label, premises);
+            } catch (InputError e) {
+                throw inputError(e);
+            } catch (StepProblem p) {
+                throw reject(p.at(), label, rule, p.reason());
+            }
+            if (o instanceof Outcome.Rejected r) {
+                throw new Stop(Verdict.REJECTED, new Failure(s.rule().at().file(), s.rule().at().line(),
+                        s.rule().at().column(), label, r.rule(), r.reason(), r.stated(), r.derived(), null));
+            }
+            Fact fact = ((Outcome.Accepted) o).fact();
+            steps++;
+            byRule.merge(rule, 1, Integer::sum);
+            labels.put(label, s.label().at());
+            facts.put(label, fact);
+            nodes.put(label, new Node(label, rule, premises));
+            if (refutation == null && fact.isEmptyClause()) refutation = label;
+        }
+
+        private Outcome apply(Step s, String label, List<String> premises) throws Stop, InputError, StepProblem {
+            RuleArgs args = s.args();
+            Signature sig = kernel.signature();
+            String rule = args.ruleName();
+            if (args instanceof NegateArgs a) {
+                Name g = a.goal();
+                if (problem.goal() == null || !g.text().equals(problem.goalName())) {
+                    throw reject(g.at(), label, rule, g.text() + " is not the problem's goal"
+                            + (problem.goal() == null ? " (the problem has none)" : " (" + problem.goalName() + ")"));
+                }
+                premises.add("goal:" + g.text());
+                return kernel.negate(label, g.text(), formula(s, sig, List.of()));
+            }
+            if (args instanceof NnfArgs a) {
+                Fact p = premise(a.premise(), label, rule, premises);
+                return kernel.nnf(label, p, formula(s, sig, List.of()));
+            }
+            if (args instanceof SkolemizeArgs a) {
+                Fact p = premise(a.premise(), label, rule, premises);
+                RawFormula raw = rawFormula(s);
+                List<Symbol> fresh = resolver.freshSymbols(raw, a.fresh(), sig);
+                Outcome o = kernel.skolemize(label, p, fresh, resolver.stepFormula(raw, sig, a.fresh()));
+                if (o.accepted()) for (int i = 0; i < fresh.size(); i++) resolver.introduced(fresh.get(i), a.fresh().get(i).at());
+                return o;
+            }
+            if (args instanceof ClausifyArgs a) {
+                Fact p = premise(a.premise(), label, rule, premises);
+                Clause c = clause(s, sig);
+                return kernel.clausify(label, p, subst(a.theta(), sig, c), c);
+            }
+            if (args instanceof DefineArgs a) {
+                RawFormula raw = rawFormula(s);
+                List<Symbol> fresh = resolver.freshSymbols(raw, List.of(a.fresh()), sig);
+                Outcome o = kernel.define(label, fresh.get(0), resolver.stepFormula(raw, sig, List.of(a.fresh())));
+                if (o.accepted()) resolver.introduced(fresh.get(0), a.fresh().at());
+                return o;
+            }
+            if (args instanceof AbbreviateArgs a) {
+                Fact p = premise(a.premise(), label, rule, premises);
+                Fact d = premise(a.definition(), label, rule, premises);
+                return kernel.abbreviate(label, p, d, formula(s, sig, List.of()));
+            }
+            if (args instanceof ResolveArgs a) {
+                Fact x = premise(a.left().label(), label, rule, premises);
+                Fact y = premise(a.right().label(), label, rule, premises);
+                Clause c = clause(s, sig);
+                return kernel.resolve(label, x, a.left().index(), subst(a.leftSubst(), sig, c), y, a.right().index(),
+                        subst(a.rightSubst(), sig, c), c);
+            }
+            if (args instanceof FactorArgs a) {
+                Fact x = sameStep(a.first(), a.second(), label, rule, premises);
+                Clause c = clause(s, sig);
+                return kernel.factor(label, x, a.first().index(), a.second().index(), subst(a.subst(), sig, c), c);
+            }
+            if (args instanceof InstantiateArgs a) {
+                Fact x = premise(a.premise(), label, rule, premises);
+                Clause c = clause(s, sig);
+                return kernel.instantiate(label, x, subst(a.subst(), sig, c), c);
+            }
+            if (args instanceof ParamodulateArgs a) {
+                Fact x = premise(a.from().label(), label, rule, premises);
+                Fact y = premise(a.into().label(), label, rule, premises);
+                Clause c = clause(s, sig);
+                int[] path = a.position().path().stream().mapToInt(Integer::intValue).toArray();
+                return kernel.paramodulate(label, x, a.from().index(), a.direction() == Direction.LEFT_TO_RIGHT, y,
+                        a.into().index(), path, subst(a.fromSubst(), sig, c), subst(a.intoSubst(), sig, c), c);
+            }
+            if (args instanceof EqresArgs a) {
+                Fact x = premise(a.literal().label(), label, rule, premises);
+                Clause c = clause(s, sig);
+                return kernel.eqres(label, x, a.literal().index(), subst(a.subst(), sig, c), c);
+            }
+            if (args instanceof EqfactorArgs a) {
+                Fact x = sameStep(a.first(), a.second(), label, rule, premises);
+                Clause c = clause(s, sig);
+                return kernel.eqfactor(label, x, a.first().index(), a.second().index(), subst(a.subst(), sig, c), c);
+            }
+            if (args instanceof ReflexivityArgs) {
+                return kernel.reflexivity(label, clause(s, sig));
+            }
+            throw new IllegalStateException("unhandled rule " + rule);
+        }
+
+        private Fact sameStep(LiteralRef x, LiteralRef y, String label, String rule, List<String> premises)
+                throws Stop {
+            if (!x.label().text().equals(y.label().text())) {
+                throw reject(y.at(), label, rule, rule + " works on two literals of one clause, not " + x + " and " + y);
+            }
+            return premise(x.label(), label, rule, premises);
+        }
+
+        private RawFormula rawFormula(Step s) throws Stop {
+            if (s.conclusion() instanceof RawFormula f) return f;
+            throw reject(s.conclusion().at(), s.label().text(), s.args().ruleName(),
+                    s.args().ruleName() + " concludes a formula; write 'formula', not 'clause'");
+        }
+
+        private Formula formula(Step s, Signature sig, List<Name> fresh) throws Stop, InputError, StepProblem {
+            return resolver.stepFormula(rawFormula(s), sig, fresh);
+        }
+
+        private Clause clause(Step s, Signature sig) throws Stop, InputError, StepProblem {
+            RawConclusion c = s.conclusion();
+            if (c instanceof RawClause rc) return resolver.stepClause(rc, sig);
+            throw reject(c.at(), s.label().text(), s.args().ruleName(),
+                    s.args().ruleName() + " concludes a clause; write 'clause', not 'formula'");
+        }
+
+        private Substitution subst(RawSubstitution raw, Signature sig, Clause conclusion)
+                throws InputError, StepProblem {
+            if (raw == null) return null;
+            Set<Variable> vars = new LinkedHashSet<>(conclusion.variables());
+            return resolver.substitution(raw, sig, vars);
+        }
+
+        private Fact premise(Name n, String label, String rule, List<String> premises) throws Stop {
+            String name = n.text();
+            Fact f = facts.get(name);
+            if (f != null) {
+                premises.add(name);
+                return f;
+            }
+            if (forgotten.containsKey(name)) {
+                throw reject(n.at(), label, rule, name + " was forgotten at " + forgotten.get(name)
+                        + " and cannot be used again");
+            }
+            Fact ax = kernel.axiom(name);
+            if (ax != null) {
+                premises.add("axiom:" + name);
+                return ax;
+            }
+            if (name.equals(problem.goalName())) {
+                throw reject(n.at(), label, rule, "the goal " + name + " is never a premise: only negate may name it");
+            }
+            if (name.equals(label)) throw reject(n.at(), label, rule, "step " + label + " cannot use itself");
+            throw reject(n.at(), label, rule, "unknown premise " + name + ": neither an earlier step nor an axiom"
+                    + " (premises must come before the step that uses them)");
+        }
+
+        void finish(Location last) throws Stop {
+            if (refutation == null) {
+                throw reject(last, null, null, "no step derives the empty clause false, so nothing is refuted");
+            }
+            // The cone: every step the first empty clause rests on.
+            Set<String> seen = new HashSet<>();
+            Set<String> axiomsInCone = new HashSet<>();
+            ArrayDeque<String> todo = new ArrayDeque<>();
+            todo.push(refutation);
+            seen.add(refutation);
+            while (!todo.isEmpty()) {
+                Node n = nodes.get(todo.pop());
+                for (String p : n.premises()) {
+                    if (p.startsWith("axiom:")) axiomsInCone.add(p.substring(6));
+                    else if (p.startsWith("goal:")) goalUsed = true;
+                    else if (seen.add(p)) todo.push(p);
+                }
+            }
+            coneSize = seen.size();
+            List<String> u = new ArrayList<>();
+            List<String> nu = new ArrayList<>();
+            for (String a : problem.axioms().keySet()) (axiomsInCone.contains(a) ? u : nu).add(a);
+            used = u;
+            unused = nu;
+            if (problem.goal() == null) verdict = Verdict.UNSATISFIABLE;
+            else verdict = goalUsed ? Verdict.THEOREM : Verdict.VACUOUS;
+        }
+
+        CheckResult result(long ms) {
+            Map<String, Integer> ordered = new LinkedHashMap<>();
+            for (String r : RULES) if (byRule.containsKey(r)) ordered.put(r, byRule.get(r));
+            List<IntroducedSymbol> introduced = new ArrayList<>();
+            if (kernel != null) {
+                for (Signature.Entry e : kernel.signature().introduced()) {
+                    boolean skolem = e.origin() == Signature.Origin.SKOLEM;
+                    introduced.add(new IntroducedSymbol(e.symbol().name(), skolem ? "Skolem function" : "defined predicate",
+                            e.symbol().arity(), e.step(), skolem ? "skolemize" : "define"));
+                }
+            }
+            boolean ok = verdict != Verdict.REJECTED && verdict != Verdict.INPUT_ERROR;
+            return new CheckResult(verdict, problemFile, problemSha, certificateFile, certificateSha, problemName,
+                    digest == null ? "absent" : digest, steps, ordered, ok ? refutation : null, ok ? coneSize : 0,
+                    ok ? used : List.of(), ok ? unused : List.of(), ok && goalUsed, introduced, failure, ms);
+        }
+
+        private Stop reject(Location at, String step, String rule, String reason) {
+            return new Stop(Verdict.REJECTED, new Failure(at.file(), at.line(), at.column(), step, rule, reason,
+                    null, null, null));
+        }
+    }
+
+    private static Stop inputError(InputError e) {
+        Location at = e.at();
+        Location other = e.firstDeclared();
+        return new Stop(Verdict.INPUT_ERROR, new Failure(at.file(), at.line(), at.column(), null, null, e.reason(),
+                null, null, other == null ? null : other.toString()));
+    }
+
+    private static Stop inputError(Location at, String reason) {
+        return new Stop(Verdict.INPUT_ERROR, new Failure(at.file(), at.line(), at.column(), null, null, reason,
+                null, null, null));
+    }
+
+    private static Stop inputError(String file, String reason) {
+        return new Stop(Verdict.INPUT_ERROR, new Failure(file, 1, 1, null, null, reason, null, null, null));
+    }
+
+    private static String describe(IOException e) {
+        if (e instanceof java.nio.file.NoSuchFileException) return "no such file";
+        if (e instanceof java.nio.file.AccessDeniedException) return "permission denied";
+        if (e.getMessage() != null && e.getMessage().contains("Is a directory")) return "it is a directory";
+        return e.getClass().getSimpleName() + (e.getMessage() == null ? "" : ": " + e.getMessage());
+    }
+
+    private static void drain(InputStream in) {
+        try {
+            in.transferTo(java.io.OutputStream.nullOutputStream());
+        } catch (IOException ignored) {
+            // The digest of a file that stops being readable is not reported.
+        }
+    }
+
+    private static MessageDigest newDigest() {
+        try {
+            return MessageDigest.getInstance("SHA-256");
+        } catch (NoSuchAlgorithmException e) {
+            throw new IllegalStateException("SHA-256 is not available", e);
+        }
+    }
+
+    static String sha256(byte[] bytes) {
+        return hex(newDigest().digest(bytes));
+    }
+
+    private static String hex(byte[] digest) {
+        StringBuilder sb = new StringBuilder(64);
+        for (byte b : digest) sb.append(String.format("%02x", b));
+        return sb.toString();
+    }
+}

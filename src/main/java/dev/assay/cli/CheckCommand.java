@@ -1,0 +1,64 @@
+package dev.assay.cli;
+
+import dev.assay.check.CheckResult;
+import dev.assay.check.Checker;
+import dev.assay.report.JsonReport;
+import dev.assay.report.TextReport;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+import picocli.CommandLine.Model.CommandSpec;
+
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.concurrent.Callable;
+
+@Command(name = "check", mixinStandardHelpOptions = true,
+        description = {"Checks CERTIFICATE against PROBLEM and prints the verdict.",
+                "Every step is re-derived by the kernel; the first failure is reported with its location."},
+        footer = {"", "Exit status: 0 theorem or unsatisfiable, 3 vacuous, 1 rejected, 2 input error."})
+final class CheckCommand implements Callable<Integer> {
+
+    @Spec
+    CommandSpec spec;
+
+    @Parameters(index = "0", paramLabel = "PROBLEM", description = "the problem file (.problem)")
+    Path problem;
+
+    @Parameters(index = "1", paramLabel = "CERTIFICATE", description = "the certificate file (.proof)")
+    Path certificate;
+
+    @Option(names = "--json", paramLabel = "FILE", description = "also write the report as JSON to FILE ('-' for standard output)")
+    Path json;
+
+    @Option(names = {"-q", "--quiet"}, description = "print nothing; the exit status tells the verdict")
+    boolean quiet;
+
+    @Option(names = "--max-depth", paramLabel = "N", description = "nesting depth allowed in the input (default: ${DEFAULT-VALUE})")
+    int maxDepth = Checker.Options.defaults().maxDepth();
+
+    @Override
+    public Integer call() {
+        CheckResult r = new Checker(new Checker.Options(maxDepth)).check(problem, certificate);
+        boolean jsonToStdout = json != null && json.toString().equals("-");
+        if (!quiet && !jsonToStdout) spec.commandLine().getOut().print(TextReport.render(r));
+        if (json != null) {
+            String text = JsonReport.render(r, true);
+            if (jsonToStdout) {
+                spec.commandLine().getOut().print(text);
+            } else {
+                try {
+                    Files.writeString(json, text, StandardCharsets.UTF_8);
+                } catch (IOException e) {
+                    spec.commandLine().getErr().println("assay: cannot write " + json + ": " + e.getMessage());
+                    return 2;
+                }
+            }
+        }
+        spec.commandLine().getOut().flush();
+        return r.exitStatus();
+    }
+}
