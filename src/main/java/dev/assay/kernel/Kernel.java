@@ -365,25 +365,162 @@ public final class Kernel {
         return sameSet(rule, label, stated, sigma.apply(a.clause()));
     }
 
-    /** {@code paramodulate A.i -> B.j @ p [σA] [σB]}, or {@code <-}. */
+    /**
+     * {@code paramodulate A.i -> B.j @ p [σA] [σB]}, or {@code <-}: literal A.i is an equation {@code s = t}; {@code ->}
+     * rewrites s into t ({@code <-} t into s) at position p of the atom of B.j, never at the atom itself. With either
+     * substitution given (a missing one is empty) the rewritten side under σA and the subterm at p under σB must be
+     * the same term and the conclusion is the paramodulant itself; with none, B is renamed apart, their most general
+     * unifier is computed, and the conclusion must be a variant of the paramodulant.
+     */
     public Outcome paramodulate(String label, Fact a, int i, boolean leftToRight, Fact b, int j, int[] position,
                                 Substitution sa, Substitution sb, Clause stated) {
-        return notSupported("paramodulate", stated);
+        final String rule = "paramodulate";
+        Outcome bad = requireClauses(rule, stated, a, b);
+        if (bad == null) bad = literalIndex(rule, a, i, stated);
+        if (bad == null) bad = literalIndex(rule, b, j, stated);
+        if (bad == null) bad = unknownSymbols(rule, null, stated, sa, sb);
+        if (bad != null) return bad;
+        Literal eq = a.clause().literal(i);
+        if (!eq.isEquation() || !eq.positive()) {
+            return reject(rule, ref(a, i) + " is " + Printer.literal(eq, 200) + ", not an equation s = t",
+                    Printer.clause(stated), null);
+        }
+        Term from = leftToRight ? eq.left() : eq.right();
+        Term to = leftToRight ? eq.right() : eq.left();
+        Literal target = b.clause().literal(j);
+        String at = Positions.render(position);
+        Term u = Positions.subterm(target.atom(), position);
+        if (u == null) {
+            return reject(rule, "position " + at + " does not exist in " + ref(b, j) + " (" + Printer.literal(target, 200)
+                    + ")", Printer.clause(stated), null);
+        }
+        String direction = leftToRight ? "->" : "<-";
+        if (sa != null || sb != null) {
+            Substitution ta = sa != null ? sa : Substitution.empty(terms);
+            Substitution tb = sb != null ? sb : Substitution.empty(terms);
+            bad = domain(rule, ta, a, stated);
+            if (bad == null) bad = domain(rule, tb, b, stated);
+            if (bad != null) return bad;
+            Term fromI = ta.apply(from);
+            Term uI = tb.apply(u);
+            if (fromI != uI) {
+                return reject(rule, "under the stated substitutions the side rewritten by " + direction + ", "
+                        + Printer.term(fromI, 200) + ", differs from " + Printer.term(uI, 200) + " at position " + at
+                        + " of " + ref(b, j), Printer.clause(stated), null);
+            }
+            Literal rewritten = tb.apply(target);
+            rewritten = new Literal(rewritten.positive(), (Application) Positions.replace(terms, rewritten.atom(),
+                    position, ta.apply(to)));
+            Clause derived = union(union(ta.apply(remove(a.clause(), eq)), tb.apply(remove(b.clause(), target))),
+                    new Clause(List.of(rewritten)));
+            return sameSet(rule, label, stated, derived);
+        }
+        Clause bApart = renameApart(b.clause());
+        Literal targetApart = bApart.literal(j);
+        Term uApart = Positions.subterm(targetApart.atom(), position);
+        Unification.Result r = Unification.mostGeneralUnifier(terms, from, uApart);
+        if (r instanceof Unification.NotUnifiable nu) {
+            return reject(rule, "the side rewritten by " + direction + ", " + Printer.term(from, 200) + ", does not unify with "
+                    + Printer.term(u, 200) + " at position " + at + " of " + ref(b, j) + ": " + nu.describe(),
+                    Printer.clause(stated), null);
+        }
+        Substitution mgu = ((Unification.Unified) r).unifier();
+        Literal rewritten = new Literal(targetApart.positive(),
+                (Application) Positions.replace(terms, targetApart.atom(), position, to));
+        Clause derived = mgu.apply(union(union(remove(a.clause(), eq), remove(bApart, targetApart)),
+                new Clause(List.of(rewritten))));
+        if (Variants.areVariants(stated, derived, Variants.DEFAULT_BUDGET)) return accept(label, stated);
+        return notVariant(rule, stated, derived);
     }
 
-    /** {@code eqres A.i [σ]}. */
+    /** {@code eqres A.i [σ]}: literal i is {@code s != t}, σ makes s and t equal, the conclusion is {@code (A − A.i)σ}. */
     public Outcome eqres(String label, Fact a, int i, Substitution sigma, Clause stated) {
-        return notSupported("eqres", stated);
+        final String rule = "eqres";
+        Outcome bad = requireClauses(rule, stated, a);
+        if (bad == null) bad = literalIndex(rule, a, i, stated);
+        if (bad == null) bad = unknownSymbols(rule, null, stated, sigma);
+        if (bad != null) return bad;
+        Literal l = a.clause().literal(i);
+        if (!l.isEquation() || l.positive()) {
+            return reject(rule, ref(a, i) + " is " + Printer.literal(l, 200) + ", not a disequation s != t",
+                    Printer.clause(stated), null);
+        }
+        Clause rest = remove(a.clause(), l);
+        if (sigma != null) {
+            bad = domain(rule, sigma, a, stated);
+            if (bad != null) return bad;
+            if (sigma.apply(l.left()) != sigma.apply(l.right())) {
+                return reject(rule, "under " + Printer.substitution(sigma) + " the sides become "
+                        + Printer.term(sigma.apply(l.left()), 200) + " and " + Printer.term(sigma.apply(l.right()), 200)
+                        + ": not equal", Printer.clause(stated), null);
+            }
+            return sameSet(rule, label, stated, sigma.apply(rest));
+        }
+        Unification.Result r = Unification.mostGeneralUnifier(terms, l.left(), l.right());
+        if (r instanceof Unification.NotUnifiable nu) {
+            return reject(rule, "the sides of " + ref(a, i) + " do not unify: " + nu.describe(), Printer.clause(stated), null);
+        }
+        Clause derived = ((Unification.Unified) r).unifier().apply(rest);
+        if (Variants.areVariants(stated, derived, Variants.DEFAULT_BUDGET)) return accept(label, stated);
+        return notVariant(rule, stated, derived);
     }
 
-    /** {@code eqfactor A.i, A.j [σ]}. */
+    /**
+     * {@code eqfactor A.i, A.j [σ]}: both literals are equations {@code s = t} and {@code u = v} as written, σ makes s
+     * and u equal, and the conclusion is {@code ((A − A.i) ∪ {t != v})σ}.
+     */
     public Outcome eqfactor(String label, Fact a, int i, int j, Substitution sigma, Clause stated) {
-        return notSupported("eqfactor", stated);
+        final String rule = "eqfactor";
+        Outcome bad = requireClauses(rule, stated, a);
+        if (bad == null) bad = literalIndex(rule, a, i, stated);
+        if (bad == null) bad = literalIndex(rule, a, j, stated);
+        if (bad == null) bad = unknownSymbols(rule, null, stated, sigma);
+        if (bad != null) return bad;
+        if (i == j) {
+            return reject(rule, "equality factoring needs two different literals, not " + ref(a, i) + " twice",
+                    Printer.clause(stated), null);
+        }
+        Literal first = a.clause().literal(i);
+        Literal second = a.clause().literal(j);
+        for (Literal l : List.of(first, second)) {
+            if (!l.isEquation() || !l.positive()) {
+                return reject(rule, Printer.literal(l, 200) + " is not an equation s = t", Printer.clause(stated), null);
+            }
+        }
+        List<Literal> lits = new ArrayList<>(remove(a.clause(), first).literals());
+        lits.add(new Literal(false, terms.equation(first.right(), second.right())));
+        Clause base = new Clause(lits);
+        if (sigma != null) {
+            bad = domain(rule, sigma, a, stated);
+            if (bad != null) return bad;
+            if (sigma.apply(first.left()) != sigma.apply(second.left())) {
+                return reject(rule, "under " + Printer.substitution(sigma) + " the left sides become "
+                        + Printer.term(sigma.apply(first.left()), 200) + " and "
+                        + Printer.term(sigma.apply(second.left()), 200) + ": not equal", Printer.clause(stated), null);
+            }
+            return sameSet(rule, label, stated, sigma.apply(base));
+        }
+        Unification.Result r = Unification.mostGeneralUnifier(terms, first.left(), second.left());
+        if (r instanceof Unification.NotUnifiable nu) {
+            return reject(rule, "the left sides " + Printer.term(first.left(), 200) + " and "
+                    + Printer.term(second.left(), 200) + " do not unify: " + nu.describe(), Printer.clause(stated), null);
+        }
+        Clause derived = ((Unification.Unified) r).unifier().apply(base);
+        if (Variants.areVariants(stated, derived, Variants.DEFAULT_BUDGET)) return accept(label, stated);
+        return notVariant(rule, stated, derived);
     }
 
-    /** {@code reflexivity}: the conclusion is {@code t = t}. */
+    /** {@code reflexivity}: the conclusion is {@code t = t} for some term t. */
     public Outcome reflexivity(String label, Clause stated) {
-        return notSupported("reflexivity", stated);
+        final String rule = "reflexivity";
+        Outcome bad = unknownSymbols(rule, null, stated);
+        if (bad != null) return bad;
+        Set<Literal> set = stated.asSet();
+        if (set.size() == 1) {
+            Literal l = set.iterator().next();
+            if (l.isEquation() && l.positive() && l.left() == l.right()) return accept(label, stated);
+        }
+        return reject(rule, "reflexivity concludes a single equation t = t", Printer.clause(stated), null);
     }
 
     // ================================================================ helpers
