@@ -37,6 +37,9 @@ final class CheckCommand implements Callable<Integer> {
     @Option(names = {"-q", "--quiet"}, description = "print nothing; the exit status tells the verdict")
     boolean quiet;
 
+    @Option(names = "--brief", description = "print one line: the verdict, the certificate, and the failure if any")
+    boolean brief;
+
     @Option(names = "--max-depth", paramLabel = "N", description = "nesting depth allowed in the input (default: ${DEFAULT-VALUE})")
     int maxDepth = Checker.Options.defaults().maxDepth();
 
@@ -44,7 +47,9 @@ final class CheckCommand implements Callable<Integer> {
     public Integer call() {
         CheckResult r = new Checker(new Checker.Options(maxDepth)).check(problem, certificate);
         boolean jsonToStdout = json != null && json.toString().equals("-");
-        if (!quiet && !jsonToStdout) spec.commandLine().getOut().print(TextReport.render(r));
+        if (!quiet && !jsonToStdout) {
+            spec.commandLine().getOut().print(brief ? TextReport.brief(r) : TextReport.render(r));
+        }
         if (json != null) {
             String text = JsonReport.render(r, true);
             if (jsonToStdout) {

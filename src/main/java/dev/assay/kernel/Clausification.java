@@ -123,32 +123,39 @@ final class Clausification {
             if (--budget < 0) return new Search(null, true);
             if (backtrack) {
                 backtrack = false;
-                Goals resumed = null;
-                while (!choices.isEmpty() && resumed == null) {
+                // The rest of the goals may be empty (null) after a success, so success has its own flag.
+                boolean resumed = false;
+                Goals next = null;
+                while (!choices.isEmpty() && !resumed) {
                     Choice c = choices.peek();
                     undo(theta, trail, c.trailMark);
                     if (c.node instanceof Formula.And and) {
                         if (c.next < and.parts().size()) {
-                            resumed = new Goals(and.parts().get(c.next++), c.rest);
+                            next = new Goals(and.parts().get(c.next++), c.rest);
+                            resumed = true;
                         } else {
                             choices.pop();
                         }
                     } else {
                         Literal pattern = ((Formula.Atomic) c.node).literal();
-                        while (c.next < clause.size() * 2 && resumed == null) {
+                        while (c.next < clause.size() * 2 && !resumed) {
                             int k = c.next++;
                             boolean flip = (k & 1) == 1;
                             Literal target = clause.get(k / 2);
                             if (flip && !pattern.isEquation()) continue;
-                            if (match(pattern, target, flip, theta, trail)) resumed = c.rest;
-                            else undo(theta, trail, c.trailMark);
+                            if (match(pattern, target, flip, theta, trail)) {
+                                next = c.rest;
+                                resumed = true;
+                            } else {
+                                undo(theta, trail, c.trailMark);
+                            }
                             if (--budget < 0) return new Search(null, true);
                         }
-                        if (resumed == null) choices.pop();
+                        if (!resumed) choices.pop();
                     }
                 }
-                if (resumed == null && choices.isEmpty()) return new Search(null, false);
-                goals = resumed;
+                if (!resumed) return new Search(null, false);
+                goals = next;
                 continue;
             }
             if (goals == null) {

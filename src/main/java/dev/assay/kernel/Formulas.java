@@ -46,8 +46,9 @@ public final class Formulas {
                 work.push(new Visit(n.body(), !neg));
             } else if (f instanceof Formula.Junction j) {
                 boolean and = (j instanceof Formula.And) != neg;
-                work.push(new Build(and ? Build.AND : Build.OR, j.parts().size(), null));
-                for (int i = j.parts().size() - 1; i >= 0; i--) work.push(new Visit(j.parts().get(i), neg));
+                List<Formula> parts = flatParts(j);
+                work.push(new Build(and ? Build.AND : Build.OR, parts.size(), null));
+                for (int i = parts.size() - 1; i >= 0; i--) work.push(new Visit(parts.get(i), neg));
             } else if (f instanceof Formula.Implies imp) {
                 if (!neg) { // nnf(not a) or nnf(b)
                     work.push(new Build(Build.OR, 2, null));
@@ -100,6 +101,26 @@ public final class Formulas {
         }
     }
 
+    /**
+     * The parts of the largest tree of junctions of one kind rooted at {@code j}, left to right: a left-nested chain
+     * of n binary {@code or}s gives its n+1 operands in linear time.
+     */
+    static List<Formula> flatParts(Formula.Junction j) {
+        boolean and = j instanceof Formula.And;
+        List<Formula> out = new ArrayList<>();
+        ArrayDeque<Formula> stack = new ArrayDeque<>();
+        stack.push(j);
+        while (!stack.isEmpty()) {
+            Formula f = stack.pop();
+            if (f instanceof Formula.Junction k && (k instanceof Formula.And) == and) {
+                for (int i = k.parts().size() - 1; i >= 0; i--) stack.push(k.parts().get(i));
+            } else {
+                out.add(f);
+            }
+        }
+        return out;
+    }
+
     /** An and/or of {@code parts} with nested ones of the same kind spliced in; one part stands alone. */
     public static Formula junction(boolean and, List<Formula> parts) {
         List<Formula> flat = new ArrayList<>(parts.size());
@@ -128,11 +149,13 @@ public final class Formulas {
                     results.add(new Formula.Quantified(q.universal(), q.variable(), results.remove(results.size() - 1)));
                 } else if (f instanceof Formula.Not) {
                     Formula body = results.remove(results.size() - 1);
-                    if (body instanceof Formula.Atomic a) results.add(new Formula.Atomic(a.literal().negated()));
-                    else if (body instanceof Formula.Constant c) results.add(Formula.Constant.of(!c.value()));
-                    else results.add(new Formula.Not(body));
+                    if (body instanceof Formula.Atomic a && a.literal().positive()) {
+                        results.add(new Formula.Atomic(a.literal().negated()));
+                    } else {
+                        results.add(new Formula.Not(body));
+                    }
                 } else if (f instanceof Formula.Junction j) {
-                    int n = j.parts().size();
+                    int n = flatParts(j).size();
                     List<Formula> parts = new ArrayList<>(results.subList(results.size() - n, results.size()));
                     results.subList(results.size() - n, results.size()).clear();
                     results.add(junction(j instanceof Formula.And, parts));
@@ -144,7 +167,7 @@ public final class Formulas {
                 continue;
             }
             Formula f = (Formula) item;
-            List<Formula> cs = children(f);
+            List<Formula> cs = f instanceof Formula.Junction j ? flatParts(j) : children(f);
             if (cs.isEmpty()) {
                 results.add(f);
                 continue;
@@ -159,8 +182,8 @@ public final class Formulas {
 
     /**
      * Canonical numbering of formulas modulo renaming of bound variables (bound variables become de Bruijn indices),
-     * associativity and commutativity of and/or (nested junctions are flattened and their parts sorted), equation
-     * orientation, and {@code not} applied to an atom or constant. Two formulas are equivalent in this sense exactly
+     * associativity and commutativity of and/or (nested junctions are flattened and their parts sorted), and equation
+     * orientation; {@code not} applied to a positive atom is the negative literal, which prints the same. Two formulas are equivalent in this sense exactly
      * when they get the same number from one instance. Cost: O(n log n) in the size of the formulas.
      */
     public static final class Canon {
@@ -202,7 +225,10 @@ public final class Formulas {
             return names.computeIfAbsent(v, x -> names.size());
         }
 
-        private record Exit(Formula formula) {
+        private record Exit(Formula formula, int count) {
+            Exit(Formula formula) {
+                this(formula, 0);
+            }
         }
 
         /** The canonical number of {@code root}; free variables are kept by name. */
@@ -226,7 +252,7 @@ public final class Formulas {
                         results.add(negate(body));
                     } else if (f instanceof Formula.Junction j) {
                         int tag = j instanceof Formula.And ? AND : OR;
-                        int n = j.parts().size();
+                        int n = e.count;
                         List<Integer> parts = results.subList(results.size() - n, results.size());
                         ArrayList<Integer> flat = new ArrayList<>();
                         for (int p : parts) {
@@ -261,8 +287,9 @@ public final class Formulas {
                     work.push(new Exit(f));
                     work.push(n.body());
                 } else if (f instanceof Formula.Junction j) {
-                    work.push(new Exit(f));
-                    for (int i = j.parts().size() - 1; i >= 0; i--) work.push(j.parts().get(i));
+                    List<Formula> parts = flatParts(j);
+                    work.push(new Exit(f, parts.size()));
+                    for (int i = parts.size() - 1; i >= 0; i--) work.push(parts.get(i));
                 } else if (f instanceof Formula.Implies imp) {
                     work.push(new Exit(f));
                     work.push(imp.right());
@@ -276,10 +303,10 @@ public final class Formulas {
             return results.get(0);
         }
 
+        /** {@code not A} for a positive atom A is the negative literal; everything else keeps its {@code not}. */
         private int negate(int body) {
             int[] d = byId.get(body);
-            if (d[0] == ATOM) return intern(ATOM, 1 - d[1], d[2]);
-            if (d[0] == CONST) return intern(CONST, 1 - d[1]);
+            if (d[0] == ATOM && d[1] == 1) return intern(ATOM, 0, d[2]);
             return intern(NOT, body);
         }
 

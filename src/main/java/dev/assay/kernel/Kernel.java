@@ -292,7 +292,7 @@ public final class Kernel {
             Clause derived = union(ta.apply(remove(a.clause(), li)), tb.apply(remove(b.clause(), lj)));
             return sameSet(rule, label, stated, derived);
         }
-        Clause bApart = renameApart(b.clause());
+        Clause bApart = renameApart(b.clause(), a.clause());
         Literal ljApart = bApart.literal(j);
         Clause restA = remove(a.clause(), li);
         Clause restB = remove(bApart, ljApart);
@@ -415,7 +415,7 @@ public final class Kernel {
                     new Clause(List.of(rewritten)));
             return sameSet(rule, label, stated, derived);
         }
-        Clause bApart = renameApart(b.clause());
+        Clause bApart = renameApart(b.clause(), a.clause());
         Literal targetApart = bApart.literal(j);
         Term uApart = Positions.subterm(targetApart.atom(), position);
         Unification.Result r = Unification.mostGeneralUnifier(terms, from, uApart);
@@ -487,6 +487,12 @@ public final class Kernel {
                 return reject(rule, Printer.literal(l, 200) + " is not an equation s = t", Printer.clause(stated), null);
             }
         }
+        // A clause is a set: a repeated equation, in either orientation, is one literal, and factoring it with
+        // itself would wrongly derive t != v from s = t alone.
+        if (first.equals(second)) {
+            return reject(rule, ref(a, i) + " and " + ref(a, j) + " are the same literal " + Printer.literal(first, 200)
+                    + " (a clause is a set); equality factoring needs two different equations", Printer.clause(stated), null);
+        }
         List<Literal> lits = new ArrayList<>(remove(a.clause(), first).literals());
         lits.add(new Literal(false, terms.equation(first.right(), second.right())));
         Clause base = new Clause(lits);
@@ -554,6 +560,12 @@ public final class Kernel {
         return new Outcome.Rejected(rule, "premise " + f.label() + " belongs to another check", null, null);
     }
 
+    private static String describe(Symbol s) {
+        String kind = s.kind() == Symbol.Kind.FUNCTION ? (s.arity() == 0 ? "a constant" : "a function")
+                : (s.arity() == 0 ? "a propositional atom" : "a predicate");
+        return kind + " " + s;
+    }
+
     private static String ref(Fact f, int i) {
         return f.label() + "." + i;
     }
@@ -614,7 +626,7 @@ public final class Kernel {
             if (!signature.admits(s)) {
                 Symbol known = signature.lookup(s.name());
                 String why = known == null ? "the symbol " + s + " is not in the signature"
-                        : "the symbol " + s.name() + " is used as " + s + " but is " + known;
+                        : "the symbol " + s.name() + " is used as " + describe(s) + " but is " + describe(known);
                 return new Outcome.Rejected(rule, why, f != null ? Printer.formula(f) : c != null ? Printer.clause(c) : null, null);
             }
         }
@@ -673,10 +685,26 @@ public final class Kernel {
         return out;
     }
 
-    /** B with every variable replaced by a fresh one, so that it shares none with any parsed clause. */
-    Clause renameApart(Clause c) {
-        Map<Variable, Term> fresh = new HashMap<>();
-        for (Variable v : c.variables()) fresh.put(v, terms.freshVariable(v.name()));
-        return new Substitution(terms, fresh).apply(c);
+    /**
+     * B with each variable that also occurs in A renamed to a readable name occurring in neither (x becomes x1, x2, …),
+     * so the two share no variable and messages still show the certificate's own names.
+     */
+    Clause renameApart(Clause b, Clause a) {
+        Set<Variable> taken = new LinkedHashSet<>(a.variables());
+        List<Variable> own = b.variables();
+        taken.addAll(own);
+        Map<Variable, Term> renaming = new LinkedHashMap<>();
+        for (Variable v : own) {
+            if (!a.variables().contains(v)) continue;
+            String base = v.name().replaceAll("[0-9]+$", "");
+            for (int k = 1; ; k++) {
+                Variable candidate = terms.variable(base + k);
+                if (taken.add(candidate)) {
+                    renaming.put(v, candidate);
+                    break;
+                }
+            }
+        }
+        return new Substitution(terms, renaming).apply(b);
     }
 }

@@ -214,15 +214,14 @@ public final class Unification {
             StringBuilder sb = new StringBuilder();
             sb.append(v == null ? "?" : v.name()).append(" occurs in ")
                     .append(Printer.term(schemaOf(cycle.get(start)), 200));
-            if (cycle.size() > 1) {
-                sb.append(" once ");
-                for (int k = 1; k < cycle.size(); k++) {
-                    Term r = cycle.get((start + k) % cycle.size());
-                    Variable w = variableOf(r);
-                    if (k > 1) sb.append(", ");
-                    sb.append(w == null ? "?" : w.name()).append(" := ").append(Printer.term(schemaOf(r), 200));
-                }
+            // Classes of the cycle that hold a variable explain the chain; the others are subterms on the way.
+            List<String> chain = new ArrayList<>();
+            for (int k = 1; k < cycle.size(); k++) {
+                Term r = cycle.get((start + k) % cycle.size());
+                Variable w = variableOf(r);
+                if (w != null) chain.add(w.name() + " := " + Printer.term(schemaOf(r), 200));
             }
+            if (!chain.isEmpty()) sb.append(" once ").append(String.join(", ", chain));
             Path where = v == null ? null : boundAt.get(v);
             return new NotUnifiable(true, where == null ? "" : where.render(), sb.toString());
         }

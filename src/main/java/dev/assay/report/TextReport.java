@@ -74,6 +74,17 @@ public final class TextReport {
         return sb.toString();
     }
 
+    /** One line: verdict, certificate, and where and why it failed. */
+    public static String brief(CheckResult r) {
+        StringBuilder sb = new StringBuilder(String.format("%-13s %s", r.verdict().word(), r.certificateFile()));
+        if (r.failure() != null) {
+            sb.append("\n              ").append(r.failure().location()).append(": ");
+            if (r.failure().step() != null) sb.append("step ").append(r.failure().step()).append(": ");
+            sb.append(r.failure().reason());
+        }
+        return sb.append('\n').toString();
+    }
+
     private static String indent(String s) {
         return "  " + s.replace("\n", "\n  ");
     }

@@ -3,83 +3,147 @@ package dev.assay.syntax;
 import java.io.IOException;
 import java.io.Reader;
 import java.nio.charset.CharacterCodingException;
-import org.antlr.v4.runtime.UnbufferedCharStream;
+import java.util.Arrays;
+import org.antlr.v4.runtime.CharStream;
+import org.antlr.v4.runtime.IntStream;
+import org.antlr.v4.runtime.misc.Interval;
 
 /**
- * An unbuffered character stream that reads its {@link Reader} a block at a time instead of a
- * {@code read()} call per character, and turns a read failure into an {@link InputError} at the
- * place where it happened (for a file that is not UTF-8, the first bad byte).
+ * A character stream over a {@link Reader} that holds only a window of the input: the characters
+ * from the oldest mark (the lexer marks the start of each token) to what it has read ahead. It
+ * does what ANTLR's UnbufferedCharStream does, at about twice the speed, since it reads the
+ * Reader a block at a time and answers {@code LA(1)} from an array.
+ *
+ * <p>Characters are Unicode code points; surrogate pairs are joined. A read failure becomes an
+ * {@link InputError} at the place where it happened (for a file that is not UTF-8, the first bad
+ * byte).
  */
-final class ReaderCharStream extends UnbufferedCharStream {
+final class ReaderCharStream implements CharStream {
+
+    private static final int BLOCK = 1 << 16;
 
     private final String file;
     private final Reader reader;
-    private final char[] block = new char[1 << 16];
-    private int next;
-    private int limit;
+    private final char[] block = new char[BLOCK];
+    /** Code points; data[0] is the character at absolute index {@code start}. */
+    private int[] data = new int[2 * BLOCK];
+    private int start;
+    private int count;
+    private int p;
+    private int marks;
+    private int markedFrom;
+    private boolean endOfInput;
+    /** A high surrogate at the end of the last block, waiting for its partner. */
+    private int pendingHigh = -1;
     private int line = 1;
     private int column = 1;
 
     ReaderCharStream(String file, Reader reader) {
-        // The superclass constructor that takes a Reader reads a character at once, before this
-        // class's fields exist; this one reads nothing. The first LA(1) fills the buffer.
-        super(4096);
         this.file = file;
         this.reader = reader;
-        this.name = file;
     }
 
     @Override
-    protected int nextChar() {
-        if (next == limit) {
-            try {
-                limit = reader.read(block, 0, block.length);
-            } catch (CharacterCodingException e) {
-                throw new SyntaxFailure(new InputError(new Location(file, line, column),
-                        "the file is not valid UTF-8 text"));
-            } catch (IOException e) {
-                throw new SyntaxFailure(new InputError(new Location(file, line, column),
-                        "cannot read the file: " + e.getMessage()));
+    public int LA(int i) {
+        if (i > 0) {
+            int at = p + i - 1;
+            while (at >= count) {
+                if (!fill()) {
+                    return IntStream.EOF;
+                }
+                at = p + i - 1;
             }
-            next = 0;
-            if (limit <= 0) {
-                limit = 0;
-                return -1;
-            }
+            return data[at];
         }
-        char c = block[next++];
-        if (c == '\n') {
-            line++;
-            column = 1;
-        } else if (!Character.isLowSurrogate(c)) {
-            column++;
+        if (i < 0 && p + i >= 0) {
+            return data[p + i];
         }
-        return c;
+        if (i == 0) {
+            return 0;
+        }
+        throw new UnsupportedOperationException("the character before the window is gone");
     }
 
-    /** The text of characters {@code start..stop}, which must still be in the buffer (the current token). */
-    String textOf(int start, int stop) {
-        int from = start - getBufferStartIndex();
-        return new String(data, from, stop - start + 1);
+    @Override
+    public void consume() {
+        if (p >= count && !fill()) {
+            throw new IllegalStateException("cannot consume EOF");
+        }
+        p++;
     }
 
-    int hashOf(int start, int stop) {
-        int from = start - getBufferStartIndex();
+    @Override
+    public int mark() {
+        if (marks == 0) {
+            markedFrom = start + p;
+        }
+        marks++;
+        return -marks;
+    }
+
+    @Override
+    public void release(int marker) {
+        if (marker != -marks) {
+            throw new IllegalStateException("release() called with an invalid marker");
+        }
+        marks--;
+    }
+
+    @Override
+    public int index() {
+        return start + p;
+    }
+
+    @Override
+    public void seek(int index) {
+        while (index - start > count && fill()) {
+            // read forward to the index
+        }
+        int at = index - start;
+        if (at < 0 || at > count) {
+            throw new UnsupportedOperationException("seek to " + index + " outside the window " + start + ".." + (start + count));
+        }
+        p = at;
+    }
+
+    @Override
+    public int size() {
+        throw new UnsupportedOperationException("a stream does not know its size");
+    }
+
+    @Override
+    public String getSourceName() {
+        return file;
+    }
+
+    @Override
+    public String getText(Interval interval) {
+        return textOf(interval.a, interval.b);
+    }
+
+    /** The text of characters {@code from..to}, which must be in the window (the current token). */
+    String textOf(int from, int to) {
+        int at = from - start;
+        int length = Math.min(to, start + count - 1) - from + 1;
+        return length <= 0 ? "" : new String(data, at, length);
+    }
+
+    int hashOf(int from, int to) {
         int hash = 0;
-        for (int i = from, end = from + stop - start; i <= end; i++) {
+        for (int i = from - start, end = to - start; i <= end; i++) {
             hash = 31 * hash + data[i];
         }
         return hash;
     }
 
-    /** Whether characters {@code start..stop} spell {@code text}, which has no surrogate pairs. */
-    boolean spells(String text, int start, int stop) {
-        if (text.length() != stop - start + 1) {
+    /** Whether characters {@code from..to} spell {@code text}, which has no surrogate pairs. */
+    boolean spells(String text, int from, int to) {
+        if (text.length() != to - from + 1) {
             return false;
         }
-        int from = start - getBufferStartIndex();
+        int at = from - start;
         for (int i = 0; i < text.length(); i++) {
-            if (text.charAt(i) != data[from + i]) {
+            if (text.charAt(i) != data[at + i]) {
                 return false;
             }
         }
@@ -88,5 +152,72 @@ final class ReaderCharStream extends UnbufferedCharStream {
 
     void close() throws IOException {
         reader.close();
+    }
+
+    /** Reads the next block into the window; false at the end of the input. */
+    private boolean fill() {
+        if (endOfInput) {
+            return false;
+        }
+        int keep = marks > 0 ? Math.min(markedFrom - start, p) : p;
+        if (keep > 0) {
+            System.arraycopy(data, keep, data, 0, count - keep);
+            start += keep;
+            count -= keep;
+            p -= keep;
+        }
+        if (data.length - count < BLOCK + 1) {
+            data = Arrays.copyOf(data, Math.max(2 * data.length, count + BLOCK + 1));
+        }
+        int read;
+        do {
+            read = read();
+        } while (read == 0);
+        if (read < 0) {
+            endOfInput = true;
+            if (pendingHigh >= 0) {
+                data[count++] = pendingHigh; // a lone surrogate: the lexer calls it an illegal character
+                pendingHigh = -1;
+                return true;
+            }
+            return false;
+        }
+        int added = count;
+        for (int i = 0; i < read; i++) {
+            char c = block[i];
+            if (pendingHigh >= 0) {
+                if (Character.isLowSurrogate(c)) {
+                    data[count++] = Character.toCodePoint((char) pendingHigh, c);
+                    pendingHigh = -1;
+                    column++;
+                    continue;
+                }
+                data[count++] = pendingHigh;
+                pendingHigh = -1;
+                column++;
+            }
+            if (Character.isHighSurrogate(c)) {
+                pendingHigh = c;
+                continue;
+            }
+            data[count++] = c;
+            if (c == '\n') {
+                line++;
+                column = 1;
+            } else {
+                column++;
+            }
+        }
+        return count > added || fill();
+    }
+
+    private int read() {
+        try {
+            return reader.read(block, 0, BLOCK);
+        } catch (CharacterCodingException e) {
+            throw new SyntaxFailure(new InputError(new Location(file, line, column), "the file is not valid UTF-8 text"));
+        } catch (IOException e) {
+            throw new SyntaxFailure(new InputError(new Location(file, line, column), "cannot read the file: " + e.getMessage()));
+        }
     }
 }
