@@ -204,6 +204,10 @@ public final class Checker {
                 if (first) throw inputError(last, "the certificate is empty: it starts with 'certificate for <problem name>'");
                 finish(last);
             } catch (IOException e) {
+                if (e instanceof java.nio.channels.ClosedByInterruptException || Thread.currentThread().isInterrupted()) {
+                    throw new Stop(Verdict.TIMEOUT, new Failure(certificateFile, 1, 1, null, null,
+                            "the check was stopped at its time limit while reading the certificate", null, null, null));
+                }
                 throw inputError(certificateFile, "cannot read the certificate file: " + describe(e));
             }
         }
@@ -233,6 +237,10 @@ public final class Checker {
         }
 
         void step(Step s) throws Stop {
+            if (Thread.currentThread().isInterrupted()) {
+                throw new Stop(Verdict.TIMEOUT, new Failure(s.at().file(), s.at().line(), s.at().column(),
+                        s.label().text(), null, "the check was stopped at its time limit before this step", null, null, null));
+            }
             String label = s.label().text();
             String rule = s.args().ruleName();
             Location before = labels.get(label);
@@ -443,7 +451,7 @@ public final class Checker {
                             e.symbol().arity(), e.step(), skolem ? "skolemize" : "define"));
                 }
             }
-            boolean ok = verdict != Verdict.REJECTED && verdict != Verdict.INPUT_ERROR;
+            boolean ok = verdict == Verdict.THEOREM || verdict == Verdict.UNSATISFIABLE || verdict == Verdict.VACUOUS;
             return new CheckResult(verdict, problemFile, problemSha, certificateFile, certificateSha, problemName,
                     digest == null ? "absent" : digest, steps, ordered, ok ? refutation : null, ok ? coneSize : 0,
                     ok ? used : List.of(), ok ? unused : List.of(), ok && goalUsed, introduced, failure, ms);

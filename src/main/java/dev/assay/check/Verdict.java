@@ -6,7 +6,9 @@ public enum Verdict {
     UNSATISFIABLE(0, "unsatisfiable"),
     VACUOUS(3, "vacuous"),
     REJECTED(1, "rejected"),
-    INPUT_ERROR(2, "input error");
+    INPUT_ERROR(2, "input error"),
+    /** Not a verdict on the certificate: the check was stopped at its time limit before it finished. */
+    TIMEOUT(4, "timeout");
 
     private final int exitStatus;
     private final String word;

@@ -358,6 +358,7 @@ public final class Kernel {
     /** {@code instantiate A σ}: the conclusion is {@code Aσ}. */
     public Outcome instantiate(String label, Fact a, Substitution sigma, Clause stated) {
         final String rule = "instantiate";
+        if (sigma == null) return reject(rule, "instantiate needs a substitution", Printer.clause(stated), null);
         Outcome bad = requireClauses(rule, stated, a);
         if (bad == null) bad = unknownSymbols(rule, null, stated, sigma);
         if (bad == null) bad = domain(rule, sigma, a, stated);

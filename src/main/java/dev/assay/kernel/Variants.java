@@ -171,6 +171,9 @@ final class Variants {
 
         /** Extends the renaming so that it maps {@code s} onto {@code t}, or fails (leaving entries for undo). */
         private boolean matchTerms(Term s, Term t) {
+            // A renaming maps each term to one term, so a subterm already mapped onto y needs no second walk, and one
+            // mapped onto something else fails: shared subterms are visited once, not once per path.
+            Map<Term, Term> mapped = new HashMap<>();
             ArrayDeque<Term> stack = new ArrayDeque<>();
             stack.push(s);
             stack.push(t);
@@ -179,6 +182,11 @@ final class Variants {
                 Term x = stack.pop();
                 if (x.isGround() || y.isGround()) {
                     if (x != y) return false;
+                    continue;
+                }
+                Term before = mapped.putIfAbsent(x, y);
+                if (before != null) {
+                    if (before != y) return false;
                     continue;
                 }
                 if (x instanceof Variable vx) {

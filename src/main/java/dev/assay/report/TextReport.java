@@ -21,6 +21,7 @@ public final class TextReport {
             case VACUOUS -> sb.append(" (the refutation does not use the negated goal: the axioms alone are contradictory)");
             case REJECTED -> sb.append(" (the certificate does not establish the claim)");
             case INPUT_ERROR -> sb.append(" (an input could not be read, parsed or resolved)");
+            case TIMEOUT -> sb.append(" (the check did not finish within its time limit)");
         }
         sb.append('\n');
         if (r.failure() != null) {
