@@ -104,9 +104,38 @@ public final class Checker {
     private record Node(String label, String rule, List<String> premises) {
     }
 
+    /** Told of the problem and of each step as the checker understood it, for re-printing. */
+    public interface Listener {
+        void problem(Problem problem);
+
+        /** {@code conclusion} is the resolved Formula or Clause of an accepted step. */
+        void step(Step step, Object conclusion);
+
+        void forget(Forget forget);
+    }
+
+    private static final Listener SILENT = new Listener() {
+        @Override
+        public void problem(Problem problem) {
+        }
+
+        @Override
+        public void step(Step step, Object conclusion) {
+        }
+
+        @Override
+        public void forget(Forget forget) {
+        }
+    };
+
     public CheckResult check(Path problemPath, Path certificatePath) {
+        return check(problemPath, certificatePath, SILENT);
+    }
+
+    public CheckResult check(Path problemPath, Path certificatePath, Listener listener) {
         long start = System.nanoTime();
-        State st = new State(problemPath.toString(), certificatePath.toString());
+        State st = new State(problemPath.toString(), certificatePath == null ? null : certificatePath.toString());
+        st.listener = listener;
         try {
             st.run(problemPath, certificatePath);
         } catch (Stop s) {
@@ -140,6 +169,7 @@ public final class Checker {
         List<String> unused = List.of();
         boolean goalUsed;
         int coneSize;
+        Listener listener = SILENT;
 
         State(String problemFile, String certificateFile) {
             this.problemFile = problemFile;
@@ -169,6 +199,8 @@ public final class Checker {
                 throw inputError(problemFile, "cannot read the problem file: " + describe(e));
             }
             problemName = problem.name();
+            listener.problem(problem);
+            if (certificatePath == null) return;
             kernel = new Kernel(problem, terms);
             MessageDigest md = newDigest();
             try (InputStream in = new DigestInputStream(Files.newInputStream(certificatePath), md)) {
@@ -231,6 +263,7 @@ public final class Checker {
                     facts.remove(n.text());
                     forgotten.putIfAbsent(n.text(), n.at());
                 }
+                listener.forget(f);
             } else {
                 step((Step) s);
             }
@@ -270,6 +303,7 @@ public final class Checker {
             labels.put(label, s.label().at());
             facts.put(label, fact);
             nodes.put(label, new Node(label, rule, premises));
+            listener.step(s, fact.isClause() ? fact.clause() : fact.formula());
             if (refutation == null && fact.isEmptyClause()) refutation = label;
         }
 

@@ -197,32 +197,39 @@ public final class Unification {
         }
 
         private NotUnifiable describeCycle(Term entry, ArrayDeque<Term> path) {
-            // The cycle is the part of the DFS path from entry to the top of the stack.
+            // The cycle is the part of the DFS path from entry to the top of the stack: the schema of each class has
+            // an argument in the next class, and the last one's has an argument back in the first.
             List<Term> cycle = new ArrayList<>();
             for (var it = path.descendingIterator(); it.hasNext(); ) {
                 Term r = it.next();
                 if (r == entry || !cycle.isEmpty()) cycle.add(r);
             }
-            int start = 0;
-            for (int k = 0; k < cycle.size(); k++) {
-                if (variableOf(cycle.get(k)) != null) {
-                    start = k;
-                    break;
+            int k = cycle.size();
+            // Name each class by the variable through which the previous class reaches it, where there is one.
+            Variable[] names = new Variable[k];
+            for (int i = 0; i < k; i++) {
+                Term next = cycle.get((i + 1) % k);
+                for (Term arg : schemaOf(cycle.get(i)).argumentArray()) {
+                    if (find(arg) == next && arg instanceof Variable v) names[(i + 1) % k] = v;
                 }
+                if (names[(i + 1) % k] == null) names[(i + 1) % k] = variableOf(next);
             }
-            Variable v = variableOf(cycle.get(start));
+            int start = 0;
+            while (start < k && names[start] == null) start++;
+            if (start == k) start = 0;
+            Variable v = names[start];
             StringBuilder sb = new StringBuilder();
-            sb.append(v == null ? "?" : v.name()).append(" occurs in ")
+            sb.append(v == null ? "a variable" : v.name()).append(" occurs in ")
                     .append(Printer.term(schemaOf(cycle.get(start)), 200));
             // Classes of the cycle that hold a variable explain the chain; the others are subterms on the way.
             List<String> chain = new ArrayList<>();
-            for (int k = 1; k < cycle.size(); k++) {
-                Term r = cycle.get((start + k) % cycle.size());
-                Variable w = variableOf(r);
-                if (w != null) chain.add(w.name() + " := " + Printer.term(schemaOf(r), 200));
+            for (int i = 1; i < k; i++) {
+                int at = (start + i) % k;
+                if (names[at] != null) chain.add(names[at].name() + " := " + Printer.term(schemaOf(cycle.get(at)), 200));
             }
             if (!chain.isEmpty()) sb.append(" once ").append(String.join(", ", chain));
-            Path where = v == null ? null : boundAt.get(v);
+            Path where = v == null ? null : boundAt.get(variableOf(cycle.get(start)));
+            if (where == null && v != null) where = boundAt.get(v);
             return new NotUnifiable(true, where == null ? "" : where.render(), sb.toString());
         }
 
