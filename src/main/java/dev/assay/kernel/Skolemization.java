@@ -18,8 +18,8 @@ import java.util.Set;
  * choices are: whether an existential is kept or replaced (only where the conclusion has an existential in that
  * place), the pairing of the parts of a junction (only among parts of equal shape, so in the common case there is
  * one candidate and the walk is linear), and the orientation of an equation. Under a junction, a replaced existential
- * whose body is a junction of the same kind is spliced into it either everywhere or nowhere in that junction; a
- * conclusion that splices some but not others is not recognised (rejected, never wrongly accepted). The worst case
+ * whose body is a junction of the same kind is spliced into it; the walk tries splicing all such existentials, none,
+ * and each kept whole exactly where the conclusion has an existential part of its shape. The worst case
  * is exponential in the number of equal-shaped parts; a search past its budget is a rejection.
  */
 final class Skolemization {
@@ -234,6 +234,12 @@ final class Skolemization {
                     if (whole.size() == jb.parts().size()) {
                         alts.add(new Object[] {new Pairing(whole, wholeEnvs, 0, jb.parts(), g.fe)});
                     }
+                    // Mixed: keep a spliceable part whole where the conclusion has a kept existential of its shape.
+                    List<Formula> mixed = new ArrayList<>();
+                    List<NEnv> mixedEnvs = new ArrayList<>();
+                    if (expandMixed(ja, g.ne, jb, mixed, mixedEnvs) && mixed.size() == jb.parts().size()) {
+                        alts.add(new Object[] {new Pairing(mixed, mixedEnvs, 0, jb.parts(), g.fe)});
+                    }
                 }
                 return alts.isEmpty() ? null : alts;
             }
@@ -271,6 +277,43 @@ final class Skolemization {
                 envs.add(e);
             }
             return any;
+        }
+
+        /**
+         * Splices each spliceable part unless the conclusion has an unused existential part of the same shape, which
+         * it then takes as kept. True when this differs from both "splice all" and "splice none".
+         */
+        private boolean expandMixed(Formula.Junction j, NEnv env, Formula.Junction conclusion, List<Formula> parts,
+                                    List<NEnv> envs) {
+            List<Long> keptShapes = new ArrayList<>();
+            for (Formula c : conclusion.parts()) {
+                if (c instanceof Formula.Quantified q && !q.universal()) keptShapes.add(shapes.ofConclusion(c));
+            }
+            boolean and = j instanceof Formula.And;
+            int kept = 0;
+            int spliced = 0;
+            for (Formula p : j.parts()) {
+                Formula body = p;
+                NEnv inner = env;
+                while (body instanceof Formula.Quantified q && !q.universal()) {
+                    inner = replaced(q, inner);
+                    body = q.body();
+                }
+                boolean spliceable = body != p && body instanceof Formula.Junction bj && (bj instanceof Formula.And) == and;
+                if (spliceable && !keptShapes.remove(shapes.ofPremise(p))) {
+                    spliced++;
+                    List<Formula> sub = new ArrayList<>();
+                    List<NEnv> subEnvs = new ArrayList<>();
+                    expandParts((Formula.Junction) body, inner, true, sub, subEnvs);
+                    parts.addAll(sub);
+                    envs.addAll(subEnvs);
+                } else {
+                    if (spliceable) kept++;
+                    parts.add(p);
+                    envs.add(env);
+                }
+            }
+            return kept > 0 && spliced > 0;
         }
 
         private List<Object[]> pair(Pairing p) {
