@@ -296,21 +296,10 @@ public final class Kernel {
         Literal ljApart = bApart.literal(j);
         Clause restA = remove(a.clause(), li);
         Clause restB = remove(bApart, ljApart);
-        String failure = null;
-        Clause lastDerived = null;
-        for (Term[] pair : atomPairs(li, ljApart)) {
-            Unification.Result r = Unification.mostGeneralUnifier(terms, pair[0], pair[1]);
-            if (r instanceof Unification.Unified u) {
-                Clause derived = union(u.unifier().apply(restA), u.unifier().apply(restB));
-                if (Variants.areVariants(stated, derived, Variants.DEFAULT_BUDGET)) return accept(label, stated);
-                if (lastDerived == null) lastDerived = derived;
-            } else if (failure == null) {
-                failure = ((Unification.NotUnifiable) r).describe();
-            }
-        }
-        if (lastDerived != null) return notVariant(rule, stated, lastDerived);
-        return reject(rule, "the atoms of " + ref(a, i) + " and " + ref(b, j) + ", " + Printer.term(li.atom())
-                + " and " + Printer.term(lj.atom()) + ", do not unify: " + failure, Printer.clause(stated), null);
+        return unifyThenCompare(rule, label, stated, atomPairs(li, ljApart),
+                mgu -> union(mgu.apply(restA), mgu.apply(restB)),
+                "the atoms of " + ref(a, i) + " and " + ref(b, j) + ", " + Printer.term(li.atom()) + " and "
+                        + Printer.term(lj.atom()) + ", do not unify: ");
     }
 
     /** {@code factor A.i, A.j [σ]}. */
@@ -339,20 +328,8 @@ public final class Kernel {
             }
             return sameSet(rule, label, stated, sigma.apply(a.clause()));
         }
-        String failure = null;
-        Clause lastDerived = null;
-        for (Term[] pair : atomPairs(li, lj)) {
-            Unification.Result r = Unification.mostGeneralUnifier(terms, pair[0], pair[1]);
-            if (r instanceof Unification.Unified u) {
-                Clause derived = u.unifier().apply(a.clause());
-                if (Variants.areVariants(stated, derived, Variants.DEFAULT_BUDGET)) return accept(label, stated);
-                if (lastDerived == null) lastDerived = derived;
-            } else if (failure == null) {
-                failure = ((Unification.NotUnifiable) r).describe();
-            }
-        }
-        if (lastDerived != null) return notVariant(rule, stated, lastDerived);
-        return reject(rule, ref(a, i) + " and " + ref(a, j) + " do not unify: " + failure, Printer.clause(stated), null);
+        return unifyThenCompare(rule, label, stated, atomPairs(li, lj), mgu -> mgu.apply(a.clause()),
+                ref(a, i) + " and " + ref(a, j) + " do not unify: ");
     }
 
     /** {@code instantiate A σ}: the conclusion is {@code Aσ}. */
@@ -674,6 +651,28 @@ public final class Kernel {
         List<Literal> out = new ArrayList<>(x.literals());
         out.addAll(y.literals());
         return new Clause(out);
+    }
+
+    /**
+     * Tries each way of setting the atoms equal: the first most general unifier whose derived clause has the
+     * conclusion as a variant accepts; otherwise the rejection shows the first derived clause, or why none unified.
+     */
+    private Outcome unifyThenCompare(String rule, String label, Clause stated, List<Term[]> pairs,
+                                     java.util.function.Function<Substitution, Clause> derive, String notUnifiable) {
+        String failure = null;
+        Clause firstDerived = null;
+        for (Term[] pair : pairs) {
+            Unification.Result r = Unification.mostGeneralUnifier(terms, pair[0], pair[1]);
+            if (r instanceof Unification.Unified u) {
+                Clause derived = derive.apply(u.unifier());
+                if (Variants.areVariants(stated, derived, Variants.DEFAULT_BUDGET)) return accept(label, stated);
+                if (firstDerived == null) firstDerived = derived;
+            } else if (failure == null) {
+                failure = ((Unification.NotUnifiable) r).describe();
+            }
+        }
+        if (firstDerived != null) return notVariant(rule, stated, firstDerived);
+        return reject(rule, notUnifiable + failure, Printer.clause(stated), null);
     }
 
     /** The ways two atoms can be set equal: as written, and for two equations also with one side swapped. */
