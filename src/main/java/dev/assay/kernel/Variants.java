@@ -5,7 +5,9 @@ import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.IdentityHashMap;
 import java.util.List;
+import java.util.LinkedHashSet;
 import java.util.Map;
+import java.util.Set;
 
 /**
  * Whether two clauses are variants: equal as sets of literals under a one-to-one renaming of variables, with
@@ -77,20 +79,91 @@ final class Variants {
         if (la.size() != lb.size()) return false;
         if (la.isEmpty()) return true;
         Skeletons sk = new Skeletons();
-        Map<Integer, List<Literal>> byShape = new HashMap<>();
-        for (Literal l : lb) byShape.computeIfAbsent(sk.of(l), k -> new ArrayList<>()).add(l);
-        // Every literal of a needs a candidate of the same skeleton, and the group sizes must agree.
-        Map<Integer, Integer> countA = new HashMap<>();
-        for (Literal l : la) countA.merge(sk.of(l), 1, Integer::sum);
-        for (Map.Entry<Integer, Integer> e : countA.entrySet()) {
+        Map<Variable, Integer> occA = occurrences(la);
+        Map<Variable, Integer> occB = occurrences(lb);
+        Map<Long, List<Literal>> byShape = new HashMap<>();
+        for (Literal l : lb) byShape.computeIfAbsent(key(sk, l, occB), k -> new ArrayList<>()).add(l);
+        // Every literal of a needs a candidate of the same key, and the group sizes must agree.
+        Map<Long, Integer> countA = new HashMap<>();
+        Map<Literal, Long> keyA = new HashMap<>();
+        for (Literal l : la) {
+            long k = key(sk, l, occA);
+            keyA.put(l, k);
+            countA.merge(k, 1, Integer::sum);
+        }
+        for (Map.Entry<Long, Integer> e : countA.entrySet()) {
             List<Literal> g = byShape.get(e.getKey());
             if (g == null || g.size() != e.getValue()) return false;
         }
         // Most constrained literals first.
-        la.sort((x, y) -> Integer.compare(byShape.get(sk.of(x)).size(), byShape.get(sk.of(y)).size()));
+        la.sort((x, y) -> Integer.compare(byShape.get(keyA.get(x)).size(), byShape.get(keyA.get(y)).size()));
         List<List<Literal>> candidates = new ArrayList<>();
-        for (Literal l : la) candidates.add(byShape.get(sk.of(l)));
+        for (Literal l : la) candidates.add(byShape.get(keyA.get(l)));
         return new Search(la, candidates, budget).run();
+    }
+
+    /** In how many literals each variable occurs: a renaming keeps these counts. */
+    private static Map<Variable, Integer> occurrences(List<Literal> literals) {
+        Map<Variable, Integer> out = new HashMap<>();
+        for (Literal l : literals) {
+            Set<Variable> vs = new LinkedHashSet<>();
+            Terms.collectVariables(l.atom(), vs);
+            for (Variable v : vs) out.merge(v, 1, Integer::sum);
+        }
+        return out;
+    }
+
+    /**
+     * The skeleton hash refined by those counts at each variable (each side of an equation on its own, combined
+     * without order). Renaming-invariant, and it tells apart the two ends of a chain P(x0, x1), P(x1, x2), … from
+     * its middle, so such a chain is matched without search. Computed on the term graph, once per shared subterm.
+     */
+    private static long key(Skeletons sk, Literal l, Map<Variable, Integer> occ) {
+        long base = sk.of(l);
+        Application atom = l.atom();
+        Map<Term, Long> memo = new HashMap<>();
+        if (atom.isEquation()) {
+            long x = counts(atom.argument(0), occ, memo);
+            long y = counts(atom.argument(1), occ, memo);
+            return base * 1_000_003L + (x + y) * 31 + (x ^ y);
+        }
+        return base * 1_000_003L + counts(atom, occ, memo);
+    }
+
+    private static long counts(Term root, Map<Variable, Integer> occ, Map<Term, Long> memo) {
+        ArrayDeque<Term> stack = new ArrayDeque<>();
+        stack.push(root);
+        while (!stack.isEmpty()) {
+            Term t = stack.peek();
+            if (memo.containsKey(t)) {
+                stack.pop();
+                continue;
+            }
+            if (t instanceof Variable v) {
+                memo.put(t, (long) occ.get(v) * 0x9E3779B97F4A7C15L);
+                stack.pop();
+                continue;
+            }
+            if (t.isGround()) {
+                memo.put(t, 3L);
+                stack.pop();
+                continue;
+            }
+            Term[] args = ((Application) t).argumentArray();
+            boolean ready = true;
+            for (Term arg : args) {
+                if (!memo.containsKey(arg)) {
+                    stack.push(arg);
+                    ready = false;
+                }
+            }
+            if (!ready) continue;
+            stack.pop();
+            long h = 7;
+            for (Term arg : args) h = h * 131 + memo.get(arg);
+            memo.put(t, h);
+        }
+        return memo.get(root);
     }
 
     /** Backtracking over literal pairings and equation orientations, with an undo trail; no recursion. */
@@ -111,25 +184,32 @@ final class Variants {
 
         boolean run() {
             int n = literals.size();
-            // choice[k] encodes candidate index * 2 + orientation for literal k.
+            // order[k] is the literal matched at depth k; choice[k] encodes candidate index * 2 + orientation.
+            int[] order = new int[n];
             int[] choice = new int[n];
             int[] trailMark = new int[n];
+            boolean[] placed = new boolean[n];
             Literal[] taken = new Literal[n];
             int k = 0;
-            choice[0] = 0;
+            if (n > 0) {
+                order[0] = next(placed);
+                placed[order[0]] = true;
+            }
             while (k >= 0) {
                 if (--budget < 0) return false;
                 if (k == n) return true;
-                List<Literal> cands = candidates.get(k);
+                int lit = order[k];
+                List<Literal> cands = candidates.get(lit);
                 boolean advanced = false;
                 while (choice[k] < cands.size() * 2) {
                     int c = choice[k]++;
                     Literal target = cands.get(c / 2);
                     boolean flip = (c & 1) == 1;
-                    if (flip && !literals.get(k).isEquation()) continue;
+                    if (flip && !literals.get(lit).isEquation()) continue;
                     if (used.containsKey(target)) continue;
+                    if (--budget < 0) return false;
                     trailMark[k] = trail.size();
-                    if (matchLiteral(literals.get(k), target, flip)) {
+                    if (matchLiteral(literals.get(lit), target, flip)) {
                         used.put(target, Boolean.TRUE);
                         taken[k] = target;
                         advanced = true;
@@ -139,8 +219,13 @@ final class Variants {
                 }
                 if (advanced) {
                     k++;
-                    if (k < n) choice[k] = 0;
+                    if (k < n) {
+                        order[k] = next(placed);
+                        placed[order[k]] = true;
+                        choice[k] = 0;
+                    }
                 } else {
+                    placed[lit] = false;
                     k--;
                     if (k >= 0) {
                         used.remove(taken[k]);
@@ -149,6 +234,28 @@ final class Variants {
                 }
             }
             return false;
+        }
+
+        /**
+         * The literal to match next: one with a single candidate if any is left (literals are sorted so those come
+         * first), else the one with most variables already renamed, which prunes a chain of like literals at once.
+         */
+        private int next(boolean[] placed) {
+            int best = -1;
+            int bestScore = -1;
+            for (int i = 0; i < literals.size(); i++) {
+                if (placed[i]) continue;
+                if (candidates.get(i).size() == 1) return i;
+                int score = 0;
+                Set<Variable> vs = new LinkedHashSet<>();
+                Terms.collectVariables(literals.get(i).atom(), vs);
+                for (Variable v : vs) if (forward.containsKey(v)) score++;
+                if (score > bestScore) {
+                    best = i;
+                    bestScore = score;
+                }
+            }
+            return best;
         }
 
         private void undo(int mark) {
