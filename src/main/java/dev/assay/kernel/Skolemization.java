@@ -292,9 +292,15 @@ final class Skolemization {
             boolean and = j instanceof Formula.And;
             int kept = 0;
             int spliced = 0;
-            for (Formula p : j.parts()) {
+            // The same walk as expandParts, at every depth of splicing, with the choice made per part.
+            ArrayDeque<Object[]> work = new ArrayDeque<>();
+            for (int i = j.parts().size() - 1; i >= 0; i--) work.push(new Object[] {j.parts().get(i), env});
+            while (!work.isEmpty()) {
+                Object[] w = work.pop();
+                Formula p = (Formula) w[0];
+                NEnv e = (NEnv) w[1];
                 Formula body = p;
-                NEnv inner = env;
+                NEnv inner = e;
                 while (body instanceof Formula.Quantified q && !q.universal()) {
                     inner = replaced(q, inner);
                     body = q.body();
@@ -302,15 +308,12 @@ final class Skolemization {
                 boolean spliceable = body != p && body instanceof Formula.Junction bj && (bj instanceof Formula.And) == and;
                 if (spliceable && !keptShapes.remove(shapes.ofPremise(p))) {
                     spliced++;
-                    List<Formula> sub = new ArrayList<>();
-                    List<NEnv> subEnvs = new ArrayList<>();
-                    expandParts((Formula.Junction) body, inner, true, sub, subEnvs);
-                    parts.addAll(sub);
-                    envs.addAll(subEnvs);
+                    List<Formula> sub = ((Formula.Junction) body).parts();
+                    for (int i = sub.size() - 1; i >= 0; i--) work.push(new Object[] {sub.get(i), inner});
                 } else {
                     if (spliceable) kept++;
                     parts.add(p);
-                    envs.add(env);
+                    envs.add(e);
                 }
             }
             return kept > 0 && spliced > 0;

@@ -680,7 +680,7 @@ final class SkolemTestSupport {
         /**
          * Whether some junction of N has, among the parts it would splice (existentials over a junction of its kind,
          * followed through fully replaced ones), both a fully replaced chain and one with a kept existential: the
-         * kernel does not recognise such a conclusion (see {@link Skolemization}), a known incompleteness.
+         * "mixed splice" shape, which FORMAT.md accepts and the kernel's walk has to try specially (counted apart).
          */
         boolean mixedSplice() {
             for (Formula g : subformulas(n)) {
@@ -953,10 +953,6 @@ final class SkolemTestSupport {
         return out;
     }
 
-    static Set<Symbol> symbolsOf(Formula g) {
-        return Formulas.symbols(g);
-    }
-
     /** Counts by key, printed in a fixed order. */
     static final class Tally {
         final Map<String, int[]> counts = new java.util.TreeMap<>();
@@ -977,9 +973,5 @@ final class SkolemTestSupport {
                     .append(e.getValue()[0]).append('\n');
             return sb.toString();
         }
-    }
-
-    static <K, V> Map<K, V> newMap() {
-        return new HashMap<>();
     }
 }

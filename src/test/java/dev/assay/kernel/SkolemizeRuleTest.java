@@ -42,7 +42,8 @@ class SkolemizeRuleTest extends RuleTestSupport {
                 "innershadow: forall x. forall x. exists y. R(x, y)",
                 "extra: forall x. forall z. exists y. R(z, y)",
                 "nested2: forall x. exists y. (R(x, y) and forall z. exists w. T(y, z, w))",
-                "twoconj: (exists w. R(a, w) and P(w)) and (exists z. not P(z) and R(z, z))");
+                "twoconj: (exists w. R(a, w) and P(w)) and (exists z. not P(z) and R(z, z))",
+                "nestedconj: P(a) and (exists y. Q(y) and (exists z. R(y, z) and P(z)) and (exists w. Q(w) and R(w, y)))");
     }
 
     /** One skolemize step in a check of its own, so that every test call starts from the problem's signature. */
@@ -136,15 +137,25 @@ class SkolemizeRuleTest extends RuleTestSupport {
     }
 
     /**
-     * KERNEL BUG (wrong rejection, FORMAT.md section 6 accepts this): two existentials over conjunctions inside one
-     * conjunction, the first replaced and the second kept. The Skolemization javadoc says a conclusion that splices
-     * some such existentials but not others "is not recognised"; Skolemization.expand tries splicing all of them
-     * (expandParts with splice = true) or none, so the replaced one's conjuncts (flattened into the top conjunction
-     * by normalizeJunctions) never pair up. Found by a "partial" candidate of SkolemSemanticsTest (another seed).
+     * Two existentials over conjunctions inside one conjunction, the first replaced (its conjuncts spliced into the top
+     * conjunction) and the second kept. Rejected by the first version of Skolemization, which spliced all such parts
+     * or none (found by a "partial" candidate of SkolemSemanticsTest); accepted since the walk also tries keeping a
+     * part whole where the conclusion has an existential part of its shape.
      */
     @Test
     void keptAndReplacedSplicedInOneConjunction() {
         accepted(skolemize("twoconj", "(R(a, c1) and P(c1)) and (exists v. not P(v) and R(v, v))", fn("c1", 0)));
+        accepted(skolemize("twoconj", "(exists v. R(a, v) and P(v)) and not P(c2) and R(c2, c2)", fn("c2", 0)));
+    }
+
+    /**
+     * The same one level down: y is replaced and spliced into the top conjunction, and inside its body z is replaced
+     * (spliced too) while w is kept. FORMAT.md section 6 accepts this.
+     */
+    @Test
+    void keptAndReplacedSplicedInsideASplicedExistential() {
+        accepted(skolemize("nestedconj", "P(a) and Q(c1) and R(c1, c2) and P(c2) and (exists v. Q(v) and R(v, c1))",
+                fn("c1", 0), fn("c2", 0)));
     }
 
     @Test
