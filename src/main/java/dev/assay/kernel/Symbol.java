@@ -12,6 +12,18 @@ public record Symbol(String name, Kind kind, int arity) {
         if (name == null || kind == null || arity < 0) throw new IllegalArgumentException("bad symbol");
     }
 
+    // Symbols are compared on every unification and variant step: identity first, then the fields.
+    @Override
+    public boolean equals(Object o) {
+        if (this == o) return true;
+        return o instanceof Symbol s && s.arity == arity && s.kind == kind && s.name.equals(name);
+    }
+
+    @Override
+    public int hashCode() {
+        return name.hashCode() * 31 + arity;
+    }
+
     public boolean isEquality() {
         return this.equals(EQUALITY);
     }
