@@ -5,15 +5,21 @@
 // Design and decisions where FORMAT.md is silent:
 //
 // - Precedence is spelled out as one rule per level, loosest first: formula (iff), implies, or,
-//   and, unary (not, quantifier), primary. Every level is a loop or an option, not left
-//   recursion, so the grammar stays LL-friendly; the caller folds `implies` to the right.
-// - `iff` is non-associative: `a iff b iff c` is a syntax error; write parentheses.
-// - A quantifier may stand wherever a `not` may, including as the last operand of a binary
-//   connective, and its body extends as far right as possible: `a and forall x. P(x) or Q(x)` is
-//   `a and (forall x. (P(x) or Q(x)))`, `not forall x. P(x)` is `not (forall x. P(x))`. The loops
-//   below are greedy, which is what gives this reading. A body so extended is never followed
-//   by `iff` of an enclosing formula (`forall x. a iff b iff c` is the same error as without the
-//   quantifier); that check is done by the caller, since the grammar cannot say it LL-style.
+//   and, unary (not, quantifier), primary. Every level is a loop, not left recursion, and every
+//   decision of these rules is LL(1): SLL prediction is exact, and a full-LL parse costs no more.
+// - A quantifier is parsed here as a prefix of its first operand, like `not`, and its body
+//   extends as far right as possible: to the closing parenthesis around it or to the end of the
+//   formula. `a and forall x. P(x) or Q(x)` is `a and (forall x. (P(x) or Q(x)))`, and
+//   `not forall x. P(x) or Q` is `not (forall x. (P(x) or Q))`. The grammar cannot say "as far
+//   right as possible" without an ambiguity that costs ANTLR a full-context prediction at every
+//   connective (and, on a syntax error deep in nested quantifiers, time cubic in the depth), so
+//   the code that builds the syntax tree applies it: it reads the operators of one parenthesis
+//   level in order, with the precedence below, and gives a quantifier everything to its right.
+// - `iff` is non-associative: `a iff b iff c` is an error (written with parentheses it is fine).
+//   The formula rule accepts a chain so that `a iff forall x. b iff c`, which is
+//   `a iff (forall x. (b iff c))`, parses; the builder rejects two `iff` at one level.
+// - `implies` is right-associative: `a implies b implies c` is `a implies (b implies c)`.
+// - Chains of `and` and of `or` become one n-ary node; parentheses are kept as written.
 // - An atom is a term, optionally compared with `=` or `!=` to another term; whether a name is
 //   a variable or a symbol is decided later, by the layer that resolves names.
 // - `f()` is not a term: a constant is written without parentheses.
@@ -33,7 +39,7 @@ atom
     ;
 
 formula
-    : impliesFormula (IFF impliesFormula)?
+    : impliesFormula (IFF impliesFormula)*
     ;
 
 impliesFormula
@@ -50,12 +56,12 @@ andFormula
 
 unaryFormula
     : NOT unaryFormula
-    | quantifiedFormula
+    | quantifier unaryFormula
     | primaryFormula
     ;
 
-quantifiedFormula
-    : (FORALL | EXISTS) IDENT+ DOT formula
+quantifier
+    : (FORALL | EXISTS) IDENT+ DOT
     ;
 
 primaryFormula

@@ -188,8 +188,8 @@ public final class Checker {
             resolver = new Resolver(terms);
             try {
                 List<dev.assay.syntax.ProblemStatement> statements = new ArrayList<>();
-                try (ProblemReader reader = new ProblemReader(problemFile, new java.io.StringReader(
-                        new String(problemBytes, StandardCharsets.UTF_8)), options.maxDepth())) {
+                try (ProblemReader reader = new ProblemReader(problemFile,
+                        new java.io.ByteArrayInputStream(problemBytes), options.maxDepth())) {
                     for (var st = reader.next(); st != null; st = reader.next()) statements.add(st);
                 }
                 problem = resolver.problem(statements);
@@ -204,8 +204,8 @@ public final class Checker {
             kernel = new Kernel(problem, terms);
             MessageDigest md = newDigest();
             try (InputStream in = new DigestInputStream(Files.newInputStream(certificatePath), md)) {
-                CertificateReader reader = new CertificateReader(certificateFile,
-                        new java.io.InputStreamReader(in, StandardCharsets.UTF_8), options.maxDepth());
+                // Strict UTF-8: bytes that are not UTF-8 are an input error at the byte, not a replacement character.
+                CertificateReader reader = new CertificateReader(certificateFile, in, options.maxDepth());
                 boolean first = true;
                 Location last = new Location(certificateFile, 1, 1);
                 CertificateStatement s;

@@ -15,7 +15,12 @@ public final class BigStack {
     /** The stack size of {@link #run}: 1 GiB (reserved address space; pages are touched only when used). */
     public static final long STACK_BYTES = 1L << 30;
 
-    /** The nesting depth the readers accept by default; measured safe with a {@link #STACK_BYTES} stack. */
+    /**
+     * The nesting depth the readers accept by default. Measured on a {@link #STACK_BYTES} stack:
+     * a million levels of parentheses, of {@code not}, of quantifiers or of function
+     * applications parse, a syntax error at the bottom included; this default keeps a margin of
+     * ten for the layers that walk the result.
+     */
     public static final int SAFE_DEPTH = 100_000;
 
     private BigStack() {

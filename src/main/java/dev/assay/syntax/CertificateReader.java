@@ -4,8 +4,10 @@ import dev.assay.syntax.grammar.AssayLexer;
 import dev.assay.syntax.grammar.CertificateParser;
 import java.io.Closeable;
 import java.io.IOException;
+import java.io.InputStream;
 import java.io.Reader;
 import java.io.StringReader;
+import java.io.UncheckedIOException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
@@ -45,6 +47,14 @@ public final class CertificateReader implements Closeable {
         this.stream = new StatementStream<>(file, input, maxDepth, LANGUAGE);
     }
 
+    /**
+     * Reads bytes as strict UTF-8: bytes that are not UTF-8 are an {@link InputError} at the
+     * first bad byte (an InputStreamReader would replace them silently).
+     */
+    public CertificateReader(String file, InputStream input, int maxDepth) {
+        this(file, Utf8.of(input), maxDepth);
+    }
+
     /** Opens a file, read as UTF-8; bytes that are not UTF-8 are an {@link InputError} when reached. */
     public static CertificateReader open(Path file) throws IOException {
         return open(file, DEFAULT_MAX_DEPTH);
@@ -54,8 +64,12 @@ public final class CertificateReader implements Closeable {
         return new CertificateReader(file.toString(), Utf8.open(file), maxDepth);
     }
 
-    /** The next statement, or null after the last. After an error, throws the same error again. */
-    public CertificateStatement next() throws InputError {
+    /**
+     * The next statement, or null after the last. An input that cannot be parsed is an
+     * {@link InputError}; a read that fails (or is interrupted) is an IOException. After either,
+     * the reader throws the same again.
+     */
+    public CertificateStatement next() throws InputError, IOException {
         CertificateStatement statement = stream.next();
         if (statement == null) {
             if (previous == null) {
@@ -99,16 +113,20 @@ public final class CertificateReader implements Closeable {
         }
     }
 
-    public static List<CertificateStatement> readAll(String file, Reader input) throws InputError {
+    public static List<CertificateStatement> readAll(String file, Reader input) throws InputError, IOException {
         return new CertificateReader(file, input).readRest();
     }
 
     /** Reads text given in full, as in tests: {@code readAll("t.proof", "certificate for p ...")}. */
     public static List<CertificateStatement> readAll(String file, String text) throws InputError {
-        return readAll(file, new StringReader(text));
+        try {
+            return readAll(file, new StringReader(text));
+        } catch (IOException e) {
+            throw new UncheckedIOException(e); // a StringReader does not fail
+        }
     }
 
-    private List<CertificateStatement> readRest() throws InputError {
+    private List<CertificateStatement> readRest() throws InputError, IOException {
         List<CertificateStatement> statements = new ArrayList<>();
         for (CertificateStatement s; (s = next()) != null; ) {
             statements.add(s);
@@ -124,7 +142,7 @@ public final class CertificateReader implements Closeable {
                         @Override
                         public void enterRule(ParserRuleContext ctx, int state, int ruleIndex) {
                             super.enterRule(ctx, state, ruleIndex);
-                            limit.enter(ruleIndex, ctx);
+                            limit.enter(ruleIndex, ctx, getInputStream());
                         }
 
                         @Override

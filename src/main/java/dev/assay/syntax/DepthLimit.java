@@ -1,12 +1,15 @@
 package dev.assay.syntax;
 
+import dev.assay.syntax.grammar.AssayLexer;
 import java.util.Arrays;
 import org.antlr.v4.runtime.ParserRuleContext;
+import org.antlr.v4.runtime.TokenStream;
 
 /**
- * Counts the open nesting levels of the statement being parsed and stops at the limit. Every
- * level of parentheses, {@code not} and quantifiers passes through one {@code unaryFormula},
- * every level of a term through one {@code term}: the depth is how many of these are open.
+ * Counts the open nesting levels of the statement being parsed and stops at the limit. The depth
+ * is the number of open parentheses, {@code not}s and quantifiers (each is one
+ * {@code unaryFormula} of the parser) plus the nesting of function applications in an atom's
+ * arguments (each is one {@code term} inside another): {@code not not P(f(f(c)))} is 4 deep.
  *
  * <p>The parsers call {@link #enter} and {@link #exit} from their {@code enterRule} and
  * {@code exitRule} (see the readers' parser subclasses), which is cheaper than a parse listener.
@@ -15,7 +18,7 @@ final class DepthLimit {
 
     private final String file;
     private final int limit;
-    private final boolean[] counted;
+    private final GrammarRule[] rules;
     /** Whether the rule frame at each level of the parser's stack is counted. */
     private boolean[] frames = new boolean[256];
     private int level;
@@ -28,10 +31,7 @@ final class DepthLimit {
         }
         this.file = file;
         this.limit = limit;
-        this.counted = new boolean[rules.length];
-        for (int i = 0; i < rules.length; i++) {
-            counted[i] = rules[i] == GrammarRule.UNARY_FORMULA || rules[i] == GrammarRule.TERM;
-        }
+        this.rules = rules;
     }
 
     void reset() {
@@ -49,11 +49,20 @@ final class DepthLimit {
         return deepest;
     }
 
-    void enter(int ruleIndex, ParserRuleContext ctx) {
+    void enter(int ruleIndex, ParserRuleContext ctx, TokenStream tokens) {
         if (++level == frames.length) {
             frames = Arrays.copyOf(frames, frames.length * 2);
         }
-        boolean counts = counted[ruleIndex];
+        boolean counts = switch (rules[ruleIndex]) {
+            case UNARY_FORMULA -> {
+                int next = ctx.start.getType();
+                yield next == AssayLexer.NOT || next == AssayLexer.FORALL || next == AssayLexer.EXISTS
+                        || next == AssayLexer.LPAREN;
+            }
+            case TERM -> tokens.LA(2) == AssayLexer.LPAREN && ctx.getParent() != null
+                    && rules[ctx.getParent().getRuleIndex()] == GrammarRule.TERM;
+            default -> false;
+        };
         frames[level] = counts;
         if (counts && ++open > deepest) {
             deepest = open;

@@ -4,8 +4,10 @@ import dev.assay.syntax.grammar.AssayLexer;
 import dev.assay.syntax.grammar.ProblemParser;
 import java.io.Closeable;
 import java.io.IOException;
+import java.io.InputStream;
 import java.io.Reader;
 import java.io.StringReader;
+import java.io.UncheckedIOException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
@@ -45,6 +47,14 @@ public final class ProblemReader implements Closeable {
         this.stream = new StatementStream<>(file, input, maxDepth, LANGUAGE);
     }
 
+    /**
+     * Reads bytes as strict UTF-8: bytes that are not UTF-8 are an {@link InputError} at the
+     * first bad byte (an InputStreamReader would replace them silently).
+     */
+    public ProblemReader(String file, InputStream input, int maxDepth) {
+        this(file, Utf8.of(input), maxDepth);
+    }
+
     /** Opens a file, read as UTF-8; bytes that are not UTF-8 are an {@link InputError} when reached. */
     public static ProblemReader open(Path file) throws IOException {
         return open(file, DEFAULT_MAX_DEPTH);
@@ -54,8 +64,12 @@ public final class ProblemReader implements Closeable {
         return new ProblemReader(file.toString(), Utf8.open(file), maxDepth);
     }
 
-    /** The next statement, or null after the last. After an error, throws the same error again. */
-    public ProblemStatement next() throws InputError {
+    /**
+     * The next statement, or null after the last. An input that cannot be parsed is an
+     * {@link InputError}; a read that fails (or is interrupted) is an IOException. After either,
+     * the reader throws the same again.
+     */
+    public ProblemStatement next() throws InputError, IOException {
         ProblemStatement statement = stream.next();
         if (statement == null) {
             if (!started) {
@@ -95,16 +109,20 @@ public final class ProblemReader implements Closeable {
         }
     }
 
-    public static List<ProblemStatement> readAll(String file, Reader input) throws InputError {
+    public static List<ProblemStatement> readAll(String file, Reader input) throws InputError, IOException {
         return new ProblemReader(file, input).readRest();
     }
 
     /** Reads text given in full, as in tests: {@code readAll("t.problem", "problem p ...")}. */
     public static List<ProblemStatement> readAll(String file, String text) throws InputError {
-        return readAll(file, new StringReader(text));
+        try {
+            return readAll(file, new StringReader(text));
+        } catch (IOException e) {
+            throw new UncheckedIOException(e); // a StringReader does not fail
+        }
     }
 
-    private List<ProblemStatement> readRest() throws InputError {
+    private List<ProblemStatement> readRest() throws InputError, IOException {
         List<ProblemStatement> statements = new ArrayList<>();
         for (ProblemStatement s; (s = next()) != null; ) {
             statements.add(s);
@@ -120,7 +138,7 @@ public final class ProblemReader implements Closeable {
                         @Override
                         public void enterRule(ParserRuleContext ctx, int state, int ruleIndex) {
                             super.enterRule(ctx, state, ruleIndex);
-                            limit.enter(ruleIndex, ctx);
+                            limit.enter(ruleIndex, ctx, getInputStream());
                         }
 
                         @Override

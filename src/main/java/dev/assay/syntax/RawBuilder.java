@@ -2,6 +2,7 @@ package dev.assay.syntax;
 
 import dev.assay.syntax.grammar.AssayLexer;
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
 import java.util.Locale;
 import org.antlr.v4.runtime.ParserRuleContext;
@@ -13,17 +14,19 @@ import org.antlr.v4.runtime.tree.TerminalNode;
  * Turns the parse tree of one statement into raw syntax. It goes by rule name (see
  * {@link GrammarRule}), so one builder serves both parsers.
  *
- * <p>Parentheses, chains of {@code not} and of quantifiers are walked in a loop, not by
- * recursion, so the deepest inputs cost no more stack here than they did in the parser.
+ * <p>Formulas are read with explicit stacks, not by recursion; terms recurse once per level,
+ * as the parser did.
  */
 final class RawBuilder {
 
     private final String file;
     private final GrammarRule[] rules;
+    private final int maxDepth;
 
-    RawBuilder(String file, GrammarRule[] rules) {
+    RawBuilder(String file, GrammarRule[] rules, int maxDepth) {
         this.file = file;
         this.rules = rules;
+        this.maxDepth = maxDepth;
     }
 
     // ---- statements
@@ -140,121 +143,200 @@ final class RawBuilder {
 
     // ---- formulas
 
-    RawFormula formula(ParserRuleContext start) throws InputError {
-        // Parentheses are skipped, and `not` and quantifiers collected, in one loop; only the
-        // connectives recurse, into their operands.
-        List<ParserRuleContext> prefixes = null;
-        ParserRuleContext ctx = start;
+    // The kinds of operator of the formula reader below, by how tightly they bind. A quantifier
+    // binds loosest: no connective to its right ends its body, only a closing parenthesis or
+    // the end of the formula. `not` binds tightest. A parenthesis is a barrier.
+    private static final int OPEN_PARENTHESIS = 0;
+    private static final int OP_QUANTIFIER = 1;
+    private static final int OP_IFF = 2;
+    private static final int OP_IMPLIES = 3;
+    private static final int OP_OR = 4;
+    private static final int OP_AND = 5;
+    private static final int OP_NOT = 6;
+
+    /** An operator waiting for its right operand: a prefix, or a connective with its operands so far. */
+    private static final class Operator {
+        final int kind;
+        final Token token;
+        final ParserRuleContext quantifier;
+        int operands;
+
+        Operator(int kind, Token token, ParserRuleContext quantifier, int operands) {
+            this.kind = kind;
+            this.token = token;
+            this.quantifier = quantifier;
+            this.operands = operands;
+        }
+    }
+
+    /**
+     * The formula of a parse tree. The parse tree has checked the syntax; this reads its tokens in
+     * order with an operator stack (Dijkstra's shunting yard), which applies the precedence of
+     * FORMAT.md §2, gives a quantifier everything to its right (see Logic.g4), flattens chains of
+     * one connective, nests {@code implies} to the right and rejects an {@code iff} chain. Nothing
+     * here recurses with the nesting of the formula, and the depth of what is built is limited
+     * like the parser's ({@link DepthLimit}): each connective, {@code not} and quantifier of the
+     * tree is a level, and so is each function application in an atom's arguments. (A chain of
+     * implications or of quantifiers is flat to the parser but nests in the tree.)
+     */
+    RawFormula formula(ParserRuleContext root) throws InputError {
+        List<ParseTree> pending = new ArrayList<>();
+        List<Operator> operators = new ArrayList<>();
+        List<RawFormula> values = new ArrayList<>();
+        Depths depths = new Depths();
+        pending.add(root);
+        while (!pending.isEmpty()) {
+            ParseTree node = pending.remove(pending.size() - 1);
+            if (node instanceof TerminalNode terminal) {
+                Token token = terminal.getSymbol();
+                switch (token.getType()) {
+                    case AssayLexer.NOT -> operators.add(new Operator(OP_NOT, token, null, 0));
+                    case AssayLexer.AND -> connective(OP_AND, token, operators, values, depths);
+                    case AssayLexer.OR -> connective(OP_OR, token, operators, values, depths);
+                    case AssayLexer.IMPLIES -> connective(OP_IMPLIES, token, operators, values, depths);
+                    case AssayLexer.IFF -> connective(OP_IFF, token, operators, values, depths);
+                    case AssayLexer.LPAREN -> operators.add(new Operator(OPEN_PARENTHESIS, token, null, 0));
+                    case AssayLexer.RPAREN -> {
+                        while (operators.get(operators.size() - 1).kind != OPEN_PARENTHESIS) {
+                            reduce(operators, values, depths);
+                        }
+                        operators.remove(operators.size() - 1);
+                    }
+                    case AssayLexer.TRUE, AssayLexer.FALSE -> {
+                        values.add(new RawConstant(token.getType() == AssayLexer.TRUE, at(token)));
+                        depths.push(0);
+                    }
+                    default -> throw new IllegalStateException("unexpected token in a formula: " + token.getText());
+                }
+                continue;
+            }
+            ParserRuleContext ctx = (ParserRuleContext) node;
+            switch (kind(ctx)) {
+                case QUANTIFIER -> operators.add(new Operator(OP_QUANTIFIER, ctx.start, ctx, 0));
+                case ATOM -> {
+                    RawAtomic atomic = atom(ctx);
+                    values.add(new RawAtom(atomic, atomic.at()));
+                    depths.push(depthOf(atomic));
+                }
+                case FORMULA, IMPLIES_FORMULA, OR_FORMULA, AND_FORMULA, UNARY_FORMULA, PRIMARY_FORMULA -> {
+                    for (int i = ctx.getChildCount() - 1; i >= 0; i--) {
+                        pending.add(ctx.getChild(i));
+                    }
+                }
+                default -> throw unexpected(ctx);
+            }
+        }
+        while (!operators.isEmpty()) {
+            reduce(operators, values, depths);
+        }
+        if (values.size() != 1) {
+            throw new IllegalStateException("a formula left " + values.size() + " values");
+        }
+        return values.get(0);
+    }
+
+    private void connective(int kind, Token token, List<Operator> operators, List<RawFormula> values, Depths depths)
+            throws InputError {
+        // Everything that binds tighter is complete: `not`, and connectives of higher precedence.
+        // An equal one stays: `and`/`or` gain an operand, `implies` nests to the right.
+        while (!operators.isEmpty() && operators.get(operators.size() - 1).kind > kind) {
+            reduce(operators, values, depths);
+        }
+        Operator top = operators.isEmpty() ? null : operators.get(operators.size() - 1);
+        if (top != null && top.kind == kind && (kind == OP_AND || kind == OP_OR)) {
+            top.operands++;
+            return;
+        }
+        if (top != null && top.kind == OP_IFF && kind == OP_IFF) {
+            throw new InputError(at(token), SyntaxErrors.iffIsNotAssociative());
+        }
+        operators.add(new Operator(kind, token, null, 2));
+    }
+
+    private void reduce(List<Operator> operators, List<RawFormula> values, Depths depths) throws InputError {
+        Operator op = operators.remove(operators.size() - 1);
+        int last = values.size() - 1;
         RawFormula result;
-        descend:
-        while (true) {
-            int n = ctx.getChildCount();
-            switch (kind(ctx)) {
-                case FORMULA:
-                    if (n == 1) {
-                        ctx = rule(ctx, 0);
-                        continue;
-                    }
-                    ParserRuleContext left = rule(ctx, 0);
-                    if (endsInQuantifier(left)) {
-                        // `forall x. a iff b iff c`: the body took `a iff b`, and this `iff`
-                        // would chain onto it; the same error as without the quantifier.
-                        throw new InputError(at(token(ctx, 1)), SyntaxErrors.iffIsNotAssociative());
-                    }
-                    result = new RawIff(formula(left), formula(rule(ctx, 2)), at(ctx.start));
-                    break descend;
-                case IMPLIES_FORMULA:
-                    if (n == 1) {
-                        ctx = rule(ctx, 0);
-                        continue;
-                    }
-                    // a implies b implies c is a implies (b implies c): fold from the right.
-                    RawFormula right = formula(rule(ctx, n - 1));
-                    for (int i = n - 3; i >= 0; i -= 2) {
-                        ParserRuleContext operand = rule(ctx, i);
-                        right = new RawImplies(formula(operand), right, at(operand.start));
-                    }
-                    result = right;
-                    break descend;
-                case OR_FORMULA:
-                case AND_FORMULA:
-                    if (n == 1) {
-                        ctx = rule(ctx, 0);
-                        continue;
-                    }
-                    List<RawFormula> operands = new ArrayList<>((n + 1) / 2);
-                    for (int i = 0; i < n; i += 2) {
-                        operands.add(formula(rule(ctx, i)));
-                    }
-                    result = kind(ctx) == GrammarRule.OR_FORMULA
-                            ? new RawOr(operands, at(ctx.start))
-                            : new RawAnd(operands, at(ctx.start));
-                    break descend;
-                case UNARY_FORMULA:
-                    if (n == 2) {
-                        prefixes = push(prefixes, ctx);
-                        ctx = rule(ctx, 1);
-                    } else {
-                        ctx = rule(ctx, 0);
-                    }
-                    continue;
-                case QUANTIFIED_FORMULA:
-                    prefixes = push(prefixes, ctx);
-                    ctx = rule(ctx, n - 1);
-                    continue;
-                case PRIMARY_FORMULA:
-                    int first = type(ctx, 0);
-                    if (first == AssayLexer.LPAREN) {
-                        ctx = rule(ctx, 1);
-                        continue;
-                    }
-                    if (first == AssayLexer.TRUE || first == AssayLexer.FALSE) {
-                        result = new RawConstant(first == AssayLexer.TRUE, at(ctx.start));
-                    } else {
-                        result = new RawAtom(atom(rule(ctx, 0)), at(ctx.start));
-                    }
-                    break descend;
-                default:
-                    throw unexpected(ctx);
+        int depth;
+        switch (op.kind) {
+            case OP_NOT -> {
+                result = new RawNot(values.remove(last), at(op.token));
+                depth = depths.pop() + 1;
             }
-        }
-        if (prefixes != null) {
-            for (int i = prefixes.size() - 1; i >= 0; i--) {
-                ParserRuleContext prefix = prefixes.get(i);
-                if (kind(prefix) == GrammarRule.UNARY_FORMULA) {
-                    result = new RawNot(result, at(prefix.start));
-                } else {
-                    int n = prefix.getChildCount();
-                    List<Name> variables = new ArrayList<>(n - 3);
-                    for (int v = 1; v < n - 2; v++) {
-                        variables.add(name(prefix, v));
-                    }
-                    result = new RawQuantified(type(prefix, 0) == AssayLexer.FORALL, variables, result, at(prefix.start));
+            case OP_QUANTIFIER -> {
+                ParserRuleContext q = op.quantifier;
+                int n = q.getChildCount();
+                List<Name> variables = new ArrayList<>(n - 2);
+                for (int v = 1; v < n - 1; v++) {
+                    variables.add(name(q, v));
                 }
+                result = new RawQuantified(type(q, 0) == AssayLexer.FORALL, variables, values.remove(last), at(op.token));
+                depth = depths.pop() + 1;
             }
+            case OP_AND, OP_OR -> {
+                List<RawFormula> operands = new ArrayList<>(values.subList(values.size() - op.operands, values.size()));
+                values.subList(values.size() - op.operands, values.size()).clear();
+                depth = 0;
+                for (int i = 0; i < op.operands; i++) {
+                    depth = Math.max(depth, depths.pop());
+                }
+                depth++;
+                result = op.kind == OP_AND
+                        ? new RawAnd(operands, operands.get(0).at())
+                        : new RawOr(operands, operands.get(0).at());
+            }
+            case OP_IMPLIES, OP_IFF -> {
+                RawFormula right = values.remove(last);
+                RawFormula left = values.remove(last - 1);
+                depth = Math.max(depths.pop(), depths.pop()) + 1;
+                result = op.kind == OP_IMPLIES ? new RawImplies(left, right, left.at()) : new RawIff(left, right, left.at());
+            }
+            default -> throw new IllegalStateException("unbalanced parentheses in a parse tree");
         }
-        return result;
+        if (depth > maxDepth) {
+            throw new InputError(result.at(), "nesting depth exceeds the limit of " + maxDepth
+                    + " (raise it with --max-depth)");
+        }
+        values.add(result);
+        depths.push(depth);
     }
 
-    /** Whether the formula, read without its parentheses, ends with a quantifier's body. */
-    private boolean endsInQuantifier(ParserRuleContext ctx) {
-        while (true) {
-            switch (kind(ctx)) {
-                case IMPLIES_FORMULA, OR_FORMULA, AND_FORMULA, UNARY_FORMULA, FORMULA -> ctx = rule(ctx, ctx.getChildCount() - 1);
-                case QUANTIFIED_FORMULA -> {
-                    return true;
-                }
-                default -> {
-                    return false;
-                }
+    /** A stack of ints, the depth of each value on the value stack. */
+    private static final class Depths {
+        private int[] items = new int[16];
+        private int size;
+
+        void push(int depth) {
+            if (size == items.length) {
+                items = Arrays.copyOf(items, 2 * size);
             }
+            items[size++] = depth;
+        }
+
+        int pop() {
+            return items[--size];
         }
     }
 
-    private static List<ParserRuleContext> push(List<ParserRuleContext> list, ParserRuleContext ctx) {
-        List<ParserRuleContext> result = list == null ? new ArrayList<>() : list;
-        result.add(ctx);
-        return result;
+    /** The nesting of function applications in the atom's arguments, as {@link DepthLimit} counts it. */
+    private static int depthOf(RawAtomic atomic) {
+        if (atomic instanceof RawEquation equation) {
+            return Math.max(argumentDepth(equation.left()), argumentDepth(equation.right()));
+        }
+        return argumentDepth(((RawPredicateAtom) atomic).term());
+    }
+
+    private static int argumentDepth(RawTerm term) {
+        int deepest = 0;
+        for (RawTerm arg : term.args()) {
+            deepest = Math.max(deepest, applicationDepth(arg));
+        }
+        return deepest;
+    }
+
+    /** 0 for a name, 1 + the deepest argument for an application. Recurses as the parser did. */
+    private static int applicationDepth(RawTerm term) {
+        return term.args().isEmpty() ? 0 : 1 + argumentDepth(term);
     }
 
     RawAtomic atom(ParserRuleContext ctx) {

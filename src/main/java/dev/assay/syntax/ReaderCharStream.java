@@ -2,6 +2,7 @@ package dev.assay.syntax;
 
 import java.io.IOException;
 import java.io.Reader;
+import java.io.UncheckedIOException;
 import java.nio.charset.CharacterCodingException;
 import java.util.Arrays;
 import org.antlr.v4.runtime.CharStream;
@@ -14,9 +15,9 @@ import org.antlr.v4.runtime.misc.Interval;
  * does what ANTLR's UnbufferedCharStream does, at about twice the speed, since it reads the
  * Reader a block at a time and answers {@code LA(1)} from an array.
  *
- * <p>Characters are Unicode code points; surrogate pairs are joined. A read failure becomes an
- * {@link InputError} at the place where it happened (for a file that is not UTF-8, the first bad
- * byte).
+ * <p>Characters are Unicode code points; surrogate pairs are joined. Bytes that are not UTF-8
+ * are an {@link InputError} at the first bad byte; any other read failure leaves as an
+ * UncheckedIOException, which the reader turns back into the IOException.
  */
 final class ReaderCharStream implements CharStream {
 
@@ -128,28 +129,6 @@ final class ReaderCharStream implements CharStream {
         return length <= 0 ? "" : new String(data, at, length);
     }
 
-    int hashOf(int from, int to) {
-        int hash = 0;
-        for (int i = from - start, end = to - start; i <= end; i++) {
-            hash = 31 * hash + data[i];
-        }
-        return hash;
-    }
-
-    /** Whether characters {@code from..to} spell {@code text}, which has no surrogate pairs. */
-    boolean spells(String text, int from, int to) {
-        if (text.length() != to - from + 1) {
-            return false;
-        }
-        int at = from - start;
-        for (int i = 0; i < text.length(); i++) {
-            if (text.charAt(i) != data[at + i]) {
-                return false;
-            }
-        }
-        return true;
-    }
-
     void close() throws IOException {
         reader.close();
     }
@@ -217,7 +196,8 @@ final class ReaderCharStream implements CharStream {
         } catch (CharacterCodingException e) {
             throw new SyntaxFailure(new InputError(new Location(file, line, column), "the file is not valid UTF-8 text"));
         } catch (IOException e) {
-            throw new SyntaxFailure(new InputError(new Location(file, line, column), "cannot read the file: " + e.getMessage()));
+            // Not a fault of the input: the reader's caller gets it as the IOException it is.
+            throw new UncheckedIOException(e);
         }
     }
 }

@@ -3,6 +3,7 @@ package dev.assay.syntax;
 import dev.assay.syntax.grammar.AssayLexer;
 import java.io.IOException;
 import java.io.Reader;
+import java.io.UncheckedIOException;
 import org.antlr.v4.runtime.ANTLRErrorStrategy;
 import org.antlr.v4.runtime.BailErrorStrategy;
 import org.antlr.v4.runtime.Parser;
@@ -18,11 +19,13 @@ import org.antlr.v4.runtime.tree.TerminalNode;
  * Parses a file one statement at a time on one unbuffered token stream, so memory holds one
  * statement's tokens and parse tree, never the whole file's.
  *
- * <p>Each statement is parsed first in SLL prediction mode, which is the fast one and enough for
- * these LL-friendly grammars, with an error strategy that gives up at once. Only when that fails
- * is the statement parsed again from its first token, in full LL mode with the strategy that
- * reports the error in plain words ({@link SyntaxErrors}); the token stream keeps a mark on the
- * statement's start for that. A statement must be followed by the start of another statement or
+ * <p>Each statement is parsed first in SLL prediction mode with an error strategy that gives up
+ * at once. Only when that fails is the statement parsed again from its first token, in full LL
+ * mode with the strategy that reports the error in plain words ({@link SyntaxErrors}); the token
+ * stream keeps a mark on the statement's start for that. The grammars are LL(1) (ANTLR generates
+ * no adaptive prediction for them), so SLL never rejects what LL accepts and the second parse
+ * costs no more than the first; it stays in LL mode so that a grammar change that needs more
+ * lookahead stays correct. A statement must be followed by the start of another statement or
  * the end of the file; when it is not, the statement is parsed once more together with its
  * successor (the grammar's "...InContext" rule), so that the message lists everything that could
  * have continued it.
@@ -60,14 +63,17 @@ final class StatementStream<P extends Parser, S> {
     private final int maxDepth;
     private final Language<P, S> language;
     private final ReaderCharStream chars;
-    private final UnbufferedTokenStream<Token> tokens;
-    private final P parser;
+    private final AssayLexer lexer;
+    /** Made by the first {@link #next}, since making one reads the first token. */
+    private UnbufferedTokenStream<Token> tokens;
+    private P parser;
     private final GrammarRule[] rules;
     private final RawBuilder builder;
     private final SyntaxErrors reporting;
     private final BailErrorStrategy bail = new BailErrorStrategy();
     private final DepthLimit depth;
     private InputError failure;
+    private IOException readFailure;
     private boolean ended;
 
     StatementStream(String file, Reader input, int maxDepth, Language<P, S> language) {
@@ -75,31 +81,39 @@ final class StatementStream<P extends Parser, S> {
         this.maxDepth = maxDepth;
         this.language = language;
         this.chars = new ReaderCharStream(file, input);
-        AssayLexer lexer = new AssayLexer(chars);
+        this.lexer = new AssayLexer(chars);
         lexer.removeErrorListeners();
-        // The unbuffered char stream keeps only the current token's characters: tokens copy theirs.
+        // The window of the char stream holds only the current token's characters: tokens copy theirs.
         lexer.setTokenFactory(new TokenTexts(chars));
-        this.tokens = new UnbufferedTokenStream<>(lexer, 256);
         this.rules = GrammarRule.tableFor(language.ruleNames());
         this.depth = new DepthLimit(file, maxDepth, rules);
-        this.parser = language.newParser(tokens, depth);
-        parser.removeErrorListeners();
-        this.builder = new RawBuilder(file, rules);
+        this.builder = new RawBuilder(file, rules, maxDepth);
         this.reporting = new SyntaxErrors(file, rules);
     }
 
     /** The next statement, or null at the end of the file. After an error, the same error again. */
-    S next() throws InputError {
+    S next() throws InputError, IOException {
         if (failure != null) {
             throw failure;
+        }
+        if (readFailure != null) {
+            throw readFailure;
         }
         if (ended) {
             return null;
         }
         try {
+            if (tokens == null) {
+                tokens = new UnbufferedTokenStream<>(lexer, 256);
+                parser = language.newParser(tokens, depth);
+                parser.removeErrorListeners();
+            }
             return parseOne();
         } catch (SyntaxFailure e) {
             failure = e.error;
+        } catch (UncheckedIOException e) {
+            readFailure = e.getCause();
+            throw readFailure;
         } catch (StackOverflowError e) {
             failure = new InputError(here(), "nesting depth exceeds the parser's stack at depth " + depth.deepest()
                     + " (the limit is " + maxDepth + "; a deeper input needs a bigger thread stack,"
@@ -110,6 +124,9 @@ final class StatementStream<P extends Parser, S> {
 
     /** Where the stream is now: the next token, or where reading stopped. */
     Location here() {
+        if (tokens == null) {
+            return new Location(file, 1, 1);
+        }
         try {
             return SyntaxErrors.locationOf(file, tokens.LT(1));
         } catch (RuntimeException e) {

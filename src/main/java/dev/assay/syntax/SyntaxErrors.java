@@ -6,16 +6,12 @@ import java.util.List;
 import java.util.Map;
 import org.antlr.v4.runtime.DefaultErrorStrategy;
 import org.antlr.v4.runtime.InputMismatchException;
-import org.antlr.v4.runtime.NoViableAltException;
 import org.antlr.v4.runtime.Parser;
 import org.antlr.v4.runtime.ParserRuleContext;
 import org.antlr.v4.runtime.RecognitionException;
 import org.antlr.v4.runtime.Token;
 import org.antlr.v4.runtime.TokenStream;
-import org.antlr.v4.runtime.atn.ATNConfig;
 import org.antlr.v4.runtime.atn.ATNState;
-import org.antlr.v4.runtime.atn.RuleStopState;
-import org.antlr.v4.runtime.atn.Transition;
 import org.antlr.v4.runtime.misc.IntervalSet;
 
 /**
@@ -33,6 +29,10 @@ final class SyntaxErrors extends DefaultErrorStrategy {
     };
     private static final int[] CLAUSE_START = {
         AssayLexer.LBRACKET, AssayLexer.NOT, AssayLexer.IDENT, AssayLexer.FALSE,
+    };
+    private static final int[] FORMULA_OR_CLAUSE_START = {
+        AssayLexer.NOT, AssayLexer.FORALL, AssayLexer.EXISTS, AssayLexer.TRUE, AssayLexer.FALSE, AssayLexer.LPAREN,
+        AssayLexer.LBRACKET,
     };
     private static final int[] RULE_NAMES = {
         AssayLexer.NEGATE, AssayLexer.NNF, AssayLexer.SKOLEMIZE, AssayLexer.CLAUSIFY, AssayLexer.DEFINE,
@@ -115,7 +115,7 @@ final class SyntaxErrors extends DefaultErrorStrategy {
 
     InputError describe(Parser parser, RecognitionException e) {
         Token found = e.getOffendingToken() != null ? e.getOffendingToken() : parser.getCurrentToken();
-        IntervalSet expected = expectedAt(parser, e, found);
+        IntervalSet expected = expectedAt(parser, e);
         ParserRuleContext context = e.getCtx() instanceof ParserRuleContext c ? c : parser.getContext();
         GrammarRule rule = context == null ? null : rules[context.getRuleIndex()];
         ParserRuleContext parent = context == null ? null : context.getParent();
@@ -130,43 +130,21 @@ final class SyntaxErrors extends DefaultErrorStrategy {
         return new Location(file, Math.max(1, token.getLine()), token.getCharPositionInLine() + 1);
     }
 
-    private IntervalSet expectedAt(Parser parser, RecognitionException e, Token found) {
-        // A prediction that read past its first token and failed later reports the tokens
-        // expected at its decision, not at the token where every alternative failed; the
-        // configurations it was left with say what could have come there instead.
-        if (e instanceof NoViableAltException noViable
-                && noViable.getDeadEndConfigs() != null
-                && noViable.getStartToken().getTokenIndex() != found.getTokenIndex()) {
-            IntervalSet expected = new IntervalSet();
-            for (ATNConfig config : noViable.getDeadEndConfigs()) {
-                if (config.state instanceof RuleStopState) {
-                    expected.add(Token.EOF);
-                    continue;
-                }
-                for (Transition transition : config.state.getTransitions()) {
-                    IntervalSet label = transition.label();
-                    if (label != null) {
-                        expected.addAll(label);
-                    }
-                }
-            }
-            if (!expected.isNil()) {
-                return expected;
-            }
-        }
+    private static IntervalSet expectedAt(Parser parser, RecognitionException e) {
         try {
             IntervalSet expected = e.getExpectedTokens();
             if (expected != null) {
                 return expected;
             }
         } catch (RuntimeException ignored) {
-            // fall through: the state of a failed prediction may not be known
+            // fall through: the parser's own state says what it expects
         }
         return parser.getExpectedTokens();
     }
 
     private String reason(Parser parser, Token found, IntervalSet expected, GrammarRule rule) {
         int type = found.getType();
+        String suffix = "";
         if (type == AssayLexer.ILLEGAL_CHARACTER) {
             int c = found.getText().codePointAt(0);
             return "illegal character " + showCharacter(c) + HINTS.getOrDefault(c, "");
@@ -177,18 +155,21 @@ final class SyntaxErrors extends DefaultErrorStrategy {
         if (type == AssayLexer.IFF && !expected.contains(AssayLexer.IFF)) {
             return iffIsNotAssociative();
         }
-        String suffix = "";
+        if ((type == AssayLexer.RIGHT_ARROW || type == AssayLexer.LEFT_ARROW) && expected.contains(AssayLexer.IMPLIES)) {
+            suffix = " (in a formula, write 'implies' or '\u2192')";
+        }
         if (isKeyword(type) && expected.contains(AssayLexer.IDENT) && !expected.contains(type)) {
             // A keyword where a name could stand: either the name is missing (`axiom : P` is
             // clearer as "expected a name") or a reserved word is used as one (`P(resolve)`).
             boolean structural = contains(STATEMENT_KEYWORDS, type);
             boolean logical = contains(LOGICAL_KEYWORDS, type);
-            boolean onlyName = expected.size() == 1 && rule != GrammarRule.TERM && rule != GrammarRule.ATOM;
+            boolean onlyName = !containsAny(expected, FORMULA_OR_CLAUSE_START)
+                    && rule != GrammarRule.TERM && rule != GrammarRule.ATOM;
             if (nextIsOpeningParenthesis(parser, found) || onlyName && !structural || !structural && !logical) {
                 return reservedWord(found.getText());
             }
             if (onlyName) {
-                suffix = ", a reserved word";
+                suffix = ", which is a reserved word";
             }
         }
         return "expected " + describeExpected(expected, rule) + context(parser, found, expected, rule)
@@ -209,7 +190,8 @@ final class SyntaxErrors extends DefaultErrorStrategy {
     }
 
     private static boolean nextIsOpeningParenthesis(Parser parser, Token found) {
-        Token after = tokenAt(parser.getInputStream(), found.getTokenIndex() + 1);
+        TokenStream tokens = parser.getInputStream();
+        Token after = tokens.LT(1) == found ? tokens.LT(2) : tokenAt(tokens, found.getTokenIndex() + 1);
         return after != null && after.getType() == AssayLexer.LPAREN;
     }
 
@@ -360,6 +342,15 @@ final class SyntaxErrors extends DefaultErrorStrategy {
     private static boolean contains(int[] types, int type) {
         for (int t : types) {
             if (t == type) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    private static boolean containsAny(IntervalSet set, int[] types) {
+        for (int type : types) {
+            if (set.contains(type)) {
                 return true;
             }
         }

@@ -8,9 +8,8 @@ import org.antlr.v4.runtime.TokenSource;
 import org.antlr.v4.runtime.misc.Pair;
 
 /**
- * Makes tokens with their text, which an unbuffered character stream forgets once the token is
- * lexed. A keyword or punctuation token gets its one shared spelling; names are interned in a
- * small table, since a long certificate spells the same few names millions of times.
+ * Makes tokens with their text, which the windowed character stream forgets once the token is
+ * lexed. A keyword or punctuation token gets its one shared spelling instead of a new string.
  */
 final class TokenTexts implements TokenFactory<CommonToken> {
 
@@ -38,7 +37,6 @@ final class TokenTexts implements TokenFactory<CommonToken> {
     }
 
     private final ReaderCharStream chars;
-    private final String[] names = new String[4096];
 
     TokenTexts(ReaderCharStream chars) {
         this.chars = chars;
@@ -56,8 +54,6 @@ final class TokenTexts implements TokenFactory<CommonToken> {
             token.setText(stop == start ? UNICODE[type] : FIXED[type]);
         } else if (type > 0 && FIXED[type] != null) {
             token.setText(FIXED[type]);
-        } else if (type == AssayLexer.IDENT || type == AssayLexer.INT) {
-            token.setText(intern(start, stop));
         } else if (type > 0) {
             token.setText(chars.textOf(start, stop));
         }
@@ -67,22 +63,6 @@ final class TokenTexts implements TokenFactory<CommonToken> {
     @Override
     public CommonToken create(int type, String text) {
         return new CommonToken(type, text);
-    }
-
-    private String intern(int start, int stop) {
-        int length = stop - start + 1;
-        if (length > 24) {
-            return chars.textOf(start, stop);
-        }
-        int hash = chars.hashOf(start, stop);
-        int slot = (hash ^ (hash >>> 15)) & (names.length - 1);
-        String known = names[slot];
-        if (known != null && chars.spells(known, start, stop)) {
-            return known;
-        }
-        String text = chars.textOf(start, stop);
-        names[slot] = text;
-        return text;
     }
 
     private static int typeNamed(String symbolic) {

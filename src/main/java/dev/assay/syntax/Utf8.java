@@ -1,22 +1,84 @@
 package dev.assay.syntax;
 
 import java.io.IOException;
-import java.io.InputStreamReader;
+import java.io.InputStream;
 import java.io.Reader;
+import java.nio.ByteBuffer;
+import java.nio.CharBuffer;
+import java.nio.charset.CharsetDecoder;
+import java.nio.charset.CoderResult;
 import java.nio.charset.CodingErrorAction;
+import java.nio.charset.MalformedInputException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 
-/** Opens files as strict UTF-8: a malformed byte is an error, not a silent replacement character. */
-final class Utf8 {
+/**
+ * Reads a file as strict UTF-8: a malformed byte is an error, not a silent replacement character.
+ * Unlike an InputStreamReader, which drops the characters it decoded before a bad byte, this one
+ * hands them out first and fails on the next read, so the error's line and column are the bad
+ * byte's.
+ */
+final class Utf8 extends Reader {
 
-    private Utf8() {
+    private final InputStream in;
+    private final CharsetDecoder decoder = StandardCharsets.UTF_8.newDecoder()
+            .onMalformedInput(CodingErrorAction.REPORT)
+            .onUnmappableCharacter(CodingErrorAction.REPORT);
+    private final ByteBuffer bytes = ByteBuffer.allocate(1 << 16);
+    private boolean endOfBytes;
+    private boolean flushed;
+    private CoderResult error;
+
+    private Utf8(InputStream in) {
+        this.in = in;
+        bytes.flip();
     }
 
     static Reader open(Path file) throws IOException {
-        return new InputStreamReader(Files.newInputStream(file), StandardCharsets.UTF_8.newDecoder()
-                .onMalformedInput(CodingErrorAction.REPORT)
-                .onUnmappableCharacter(CodingErrorAction.REPORT));
+        return new Utf8(Files.newInputStream(file));
+    }
+
+    static Reader of(InputStream in) {
+        return new Utf8(in);
+    }
+
+    @Override
+    public int read(char[] buffer, int offset, int length) throws IOException {
+        if (length == 0) {
+            return 0;
+        }
+        CharBuffer out = CharBuffer.wrap(buffer, offset, length);
+        while (out.position() == offset) {
+            if (error != null) {
+                throw new MalformedInputException(error.length());
+            }
+            if (flushed) {
+                return -1;
+            }
+            if (!endOfBytes && bytes.remaining() < 4) {
+                bytes.compact();
+                int n = in.read(bytes.array(), bytes.position(), bytes.remaining());
+                if (n < 0) {
+                    endOfBytes = true;
+                } else {
+                    bytes.position(bytes.position() + n);
+                }
+                bytes.flip();
+            }
+            CoderResult result = decoder.decode(bytes, out, endOfBytes);
+            if (result.isError()) {
+                error = result;
+            } else if (endOfBytes && result.isUnderflow() && !bytes.hasRemaining()) {
+                decoder.flush(out);
+                flushed = true;
+            }
+        }
+        return out.position() - offset;
+    }
+
+    @Override
+    public void close() throws IOException {
+        in.close();
     }
 }
