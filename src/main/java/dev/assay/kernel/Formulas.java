@@ -87,6 +87,74 @@ public final class Formulas {
         return results.get(0);
     }
 
+    /** Largest negation normal form the kernel builds, in nodes; nested {@code iff} doubles its operands. */
+    public static final long NNF_LIMIT = 5_000_000;
+
+    /**
+     * The number of nodes of {@code nnf(root)} (index 0) and of {@code nnf(not root)} (index 1), computed without
+     * building either, saturating at Long.MAX_VALUE, so a rule can refuse a premise whose normal form is too large.
+     */
+    public static long[] nnfSize(Formula root) {
+        java.util.IdentityHashMap<Formula, long[]> memo = new java.util.IdentityHashMap<>();
+        ArrayDeque<Formula> stack = new ArrayDeque<>();
+        stack.push(root);
+        while (!stack.isEmpty()) {
+            Formula f = stack.peek();
+            if (memo.containsKey(f)) {
+                stack.pop();
+                continue;
+            }
+            List<Formula> kids = f instanceof Formula.Junction j ? flatParts(j) : children(f);
+            boolean ready = true;
+            for (Formula k : kids) {
+                if (!memo.containsKey(k)) {
+                    stack.push(k);
+                    ready = false;
+                }
+            }
+            if (!ready) continue;
+            stack.pop();
+            long pos;
+            long neg;
+            if (f instanceof Formula.Not n) {
+                long[] b = memo.get(n.body());
+                pos = b[1];
+                neg = b[0];
+            } else if (f instanceof Formula.Junction) {
+                pos = 1;
+                neg = 1;
+                for (Formula k : kids) {
+                    pos = add(pos, memo.get(k)[0]);
+                    neg = add(neg, memo.get(k)[1]);
+                }
+            } else if (f instanceof Formula.Implies i) {
+                long[] a = memo.get(i.left());
+                long[] b = memo.get(i.right());
+                pos = add(1, add(a[1], b[0]));
+                neg = add(1, add(a[0], b[1]));
+            } else if (f instanceof Formula.Iff i) {
+                long[] a = memo.get(i.left());
+                long[] b = memo.get(i.right());
+                pos = add(3, add(add(a[0], a[1]), add(b[0], b[1])));
+                neg = pos;
+            } else if (f instanceof Formula.Quantified q) {
+                long[] b = memo.get(q.body());
+                pos = add(1, b[0]);
+                neg = add(1, b[1]);
+            } else {
+                pos = 1;
+                neg = 1;
+            }
+            memo.put(f, new long[] {pos, neg});
+        }
+        return memo.get(root);
+    }
+
+    private static long add(long x, long y) {
+        long r = x + y;
+        return r < 0 ? Long.MAX_VALUE : r;
+    }
+
     private static Formula build(Build b, ArrayList<Formula> results) {
         int from = results.size() - b.count;
         List<Formula> parts = new ArrayList<>(results.subList(from, results.size()));

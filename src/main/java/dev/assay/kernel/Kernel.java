@@ -69,6 +69,8 @@ public final class Kernel {
         if (bad != null) return bad;
         Formula not = new Formula.Not(goal);
         if (Formulas.equivalent(stated, not)) return accept(label, stated);
+        bad = nnfTooLarge(rule, not, "not " + problem.goalName(), stated);
+        if (bad != null) return bad;
         Formula normal = Formulas.nnf(not);
         if (Formulas.equivalent(stated, normal)) return accept(label, stated);
         return rejectFormula(rule, "the conclusion is neither not " + problem.goalName() + " nor its negation normal form",
@@ -81,6 +83,7 @@ public final class Kernel {
         Outcome bad = requireFormula(rule, premise, stated);
         if (bad != null) return bad;
         bad = unknownSymbols(rule, stated, null);
+        if (bad == null) bad = nnfTooLarge(rule, premise.formula(), premise.label(), stated);
         if (bad != null) return bad;
         Formula normal = Formulas.nnf(premise.formula());
         if (Formulas.equivalent(stated, normal)) return accept(label, stated);
@@ -109,6 +112,7 @@ public final class Kernel {
             extended.add(s, Signature.Origin.SKOLEM, label);
         }
         bad = symbolsOutside(rule, stated, null, extended);
+        if (bad == null) bad = nnfTooLarge(rule, premise.formula(), premise.label(), stated);
         if (bad != null) return bad;
         String why = Skolemization.check(premise.formula(), premise.label(), fresh, stated);
         if (why != null) {
@@ -126,6 +130,7 @@ public final class Kernel {
             return reject(rule, premise.label() + " is a clause step; clausify takes a formula", Printer.clause(stated), null);
         }
         Outcome bad = unknownSymbols(rule, null, stated, theta);
+        if (bad == null) bad = nnfTooLarge(rule, premise.formula(), premise.label(), null);
         if (bad != null) return bad;
         Formula normal = Formulas.nnf(premise.formula());
         Formula m = Clausification.stripUniversals(normal);
@@ -246,6 +251,16 @@ public final class Kernel {
             Formula body = Formulas.substitute(d.body(), terms, args, null);
             return l.positive() ? body : new Formula.Not(body);
         });
+    }
+
+    /** A premise whose negation normal form would exceed {@link Formulas#NNF_LIMIT} nodes is refused, not built. */
+    private static Outcome nnfTooLarge(String rule, Formula f, String name, Formula stated) {
+        long size = Formulas.nnfSize(f)[0];
+        if (size <= Formulas.NNF_LIMIT) return null;
+        return reject(rule, "the negation normal form of " + name + " would have "
+                + (size == Long.MAX_VALUE ? "more than 2^63" : String.valueOf(size)) + " nodes, more than the limit of "
+                + Formulas.NNF_LIMIT + " (nested iff doubles its operands); name subformulas with define first",
+                stated, null);
     }
 
     private Outcome notFresh(String rule, Symbol s, Formula stated) {

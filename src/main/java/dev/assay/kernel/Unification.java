@@ -43,8 +43,15 @@ public final class Unification {
         String render() {
             ArrayList<Integer> steps = new ArrayList<>();
             for (Path p = this; p != null && p.index > 0; p = p.parent) steps.add(p.index);
+            // Deep positions are shortened in the middle so that a message stays readable.
             StringBuilder sb = new StringBuilder();
-            for (int i = steps.size() - 1; i >= 0; i--) {
+            int n = steps.size();
+            for (int i = n - 1; i >= 0; i--) {
+                int depth = n - 1 - i;
+                if (n > 40 && depth == 20) {
+                    sb.append("….(").append(n - 30).append(" more levels)….");
+                    i = 10;
+                }
                 sb.append(steps.get(i));
                 if (i > 0) sb.append('.');
             }
