@@ -14,6 +14,7 @@ public final class Clause {
 
     private final List<Literal> literals;
     private Set<Literal> set;
+    private List<Variable> variables;
 
     public Clause(List<Literal> literals) {
         this.literals = List.copyOf(literals);
@@ -61,9 +62,14 @@ public final class Clause {
 
     /** The variables in order of first occurrence. */
     public List<Variable> variables() {
-        Set<Variable> seen = new LinkedHashSet<>();
-        for (Literal l : literals) Terms.collectVariables(l.atom(), seen);
-        return new ArrayList<>(seen);
+        List<Variable> v = variables;
+        if (v == null) {
+            Set<Variable> seen = new LinkedHashSet<>();
+            for (Literal l : literals) Terms.collectVariables(l.atom(), seen);
+            v = List.copyOf(seen);
+            variables = v;
+        }
+        return v;
     }
 
     @Override
