@@ -108,8 +108,11 @@ public final class Checker {
     public interface Listener {
         void problem(Problem problem);
 
-        /** {@code conclusion} is the resolved Formula or Clause of an accepted step. */
-        void step(Step step, Object conclusion);
+        /**
+         * {@code conclusion} is the resolved Formula or Clause of an accepted step; {@code premises} are the labels
+         * and axiom names it rests on ({@code goal:NAME} for the goal of a negate step).
+         */
+        void step(Step step, Object conclusion, List<String> premises);
 
         void forget(Forget forget);
     }
@@ -120,7 +123,7 @@ public final class Checker {
         }
 
         @Override
-        public void step(Step step, Object conclusion) {
+        public void step(Step step, Object conclusion, List<String> premises) {
         }
 
         @Override
@@ -303,7 +306,9 @@ public final class Checker {
             labels.put(label, s.label().at());
             facts.put(label, fact);
             nodes.put(label, new Node(label, rule, premises));
-            listener.step(s, fact.isClause() ? fact.clause() : fact.formula());
+            List<String> named = new ArrayList<>();
+            for (String p : premises) named.add(p.startsWith("axiom:") ? p.substring(6) : p);
+            listener.step(s, fact.isClause() ? fact.clause() : fact.formula(), named);
             if (refutation == null && fact.isEmptyClause()) refutation = label;
         }
 

@@ -2,6 +2,7 @@ package dev.assay.cli;
 
 import dev.assay.check.CheckResult;
 import dev.assay.check.Checker;
+import dev.assay.report.HtmlReport;
 import dev.assay.report.JsonReport;
 import dev.assay.report.TextReport;
 import picocli.CommandLine.Command;
@@ -37,6 +38,9 @@ final class CheckCommand implements Callable<Integer> {
     @Option(names = {"-q", "--quiet"}, description = "print nothing; the exit status tells the verdict")
     boolean quiet;
 
+    @Option(names = "--html", paramLabel = "FILE", description = "also write a self-contained HTML report (for a review file)")
+    Path html;
+
     @Option(names = "--brief", description = "print one line: the verdict, the certificate, and the failure if any")
     boolean brief;
 
@@ -45,7 +49,18 @@ final class CheckCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        CheckResult r = new Checker(new Checker.Options(maxDepth)).check(problem, certificate);
+        HtmlReport page = html == null ? null : new HtmlReport();
+        Checker checker = new Checker(new Checker.Options(maxDepth));
+        CheckResult r = page == null ? checker.check(problem, certificate) : checker.check(problem, certificate, page);
+        if (page != null) {
+            String date = java.time.OffsetDateTime.now(java.time.ZoneOffset.UTC).withNano(0).toString();
+            try {
+                Files.writeString(html, page.render(r, Main.version(), Main.jarSha256(), date), StandardCharsets.UTF_8);
+            } catch (IOException e) {
+                spec.commandLine().getErr().println("assay: cannot write " + html + ": " + e.getMessage());
+                return 2;
+            }
+        }
         boolean jsonToStdout = json != null && json.toString().equals("-");
         if (!quiet && !jsonToStdout) {
             spec.commandLine().getOut().print(brief ? TextReport.brief(r) : TextReport.render(r));

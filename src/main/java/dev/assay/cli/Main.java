@@ -79,6 +79,24 @@ public final class Main implements Runnable {
         }
     }
 
+    /** SHA-256 of the jar this class was loaded from, or a note when it was not loaded from a jar. */
+    public static String jarSha256() {
+        try {
+            java.nio.file.Path jar = java.nio.file.Path.of(Main.class.getProtectionDomain().getCodeSource().getLocation().toURI());
+            if (!java.nio.file.Files.isRegularFile(jar)) return "(not run from a jar: " + jar + ")";
+            java.security.MessageDigest md = java.security.MessageDigest.getInstance("SHA-256");
+            try (InputStream in = java.nio.file.Files.newInputStream(jar)) {
+                byte[] buf = new byte[1 << 16];
+                for (int n; (n = in.read(buf)) > 0; ) md.update(buf, 0, n);
+            }
+            StringBuilder sb = new StringBuilder();
+            for (byte b : md.digest()) sb.append(String.format("%02x", b));
+            return sb.toString();
+        } catch (Exception e) {
+            return "(unknown: " + e.getMessage() + ")";
+        }
+    }
+
     public static String version() {
         Properties p = new Properties();
         try (InputStream in = Main.class.getResourceAsStream("/dev/assay/version.properties")) {

@@ -2,7 +2,7 @@ package dev.assay.cli;
 
 import dev.assay.check.CheckResult;
 import dev.assay.check.Checker;
-import dev.assay.kernel.Clause;
+import dev.assay.report.Canonical;
 import dev.assay.kernel.Formula;
 import dev.assay.kernel.Printer;
 import dev.assay.kernel.Problem;
@@ -65,13 +65,13 @@ final class ShowCommand implements Callable<Integer> {
         Checker.Listener listener = new Checker.Listener() {
             @Override
             public void problem(Problem p) {
-                out.print(problemText(p));
+                out.print(Canonical.problem(p));
                 if (certificate != null) cert.append("certificate for ").append(p.name()).append('\n');
             }
 
             @Override
-            public void step(Step s, Object conclusion) {
-                cert.append(stepText(s, conclusion)).append('\n');
+            public void step(Step s, Object conclusion, List<String> premises) {
+                cert.append(Canonical.step(s, conclusion)).append('\n');
             }
 
             @Override
@@ -92,72 +92,4 @@ final class ShowCommand implements Callable<Integer> {
         return r.exitStatus();
     }
 
-    static String problemText(Problem p) {
-        StringBuilder sb = new StringBuilder("problem ").append(p.name()).append('\n');
-        List<String> functions = new ArrayList<>();
-        List<String> predicates = new ArrayList<>();
-        for (Signature.Entry e : p.signature().entries()) {
-            Symbol s = e.symbol();
-            (s.kind() == Symbol.Kind.FUNCTION ? functions : predicates).add(s.name() + "/" + s.arity());
-        }
-        if (!functions.isEmpty()) sb.append("declare function ").append(String.join(", ", functions)).append('\n');
-        if (!predicates.isEmpty()) sb.append("declare predicate ").append(String.join(", ", predicates)).append('\n');
-        for (Map.Entry<String, Formula> a : p.axioms().entrySet()) {
-            sb.append("axiom ").append(a.getKey()).append(": ").append(Printer.formula(a.getValue(), Printer.UNLIMITED))
-                    .append('\n');
-        }
-        if (p.goal() != null) {
-            sb.append("goal ").append(p.goalName()).append(": ").append(Printer.formula(p.goal(), Printer.UNLIMITED))
-                    .append('\n');
-        }
-        return sb.toString();
-    }
-
-    static String stepText(Step s, Object conclusion) {
-        String body = conclusion instanceof Clause c ? "clause " + Printer.clause(c, Printer.UNLIMITED)
-                : "formula " + Printer.formula((Formula) conclusion, Printer.UNLIMITED);
-        return "step " + s.label().text() + ": " + body + " by " + s.args().ruleName() + arguments(s.args());
-    }
-
-    private static String arguments(RuleArgs a) {
-        if (a instanceof NegateArgs x) return " " + x.goal().text();
-        if (a instanceof NnfArgs x) return " " + x.premise().text();
-        if (a instanceof SkolemizeArgs x) {
-            return " " + x.premise().text() + (x.fresh().isEmpty() ? ""
-                    : " fresh " + x.fresh().stream().map(Name::text).collect(Collectors.joining(", ")));
-        }
-        if (a instanceof ClausifyArgs x) return " " + x.premise().text() + subst(x.theta());
-        if (a instanceof DefineArgs x) return " fresh " + x.fresh().text();
-        if (a instanceof AbbreviateArgs x) return " " + x.premise().text() + " using " + x.definition().text();
-        if (a instanceof ResolveArgs x) {
-            return " " + ref(x.left()) + subst(x.leftSubst()) + ", " + ref(x.right()) + subst(x.rightSubst());
-        }
-        if (a instanceof FactorArgs x) return " " + ref(x.first()) + ", " + ref(x.second()) + subst(x.subst());
-        if (a instanceof InstantiateArgs x) return " " + x.premise().text() + subst(x.subst());
-        if (a instanceof ParamodulateArgs x) {
-            String pos = x.position().path().stream().map(String::valueOf).collect(Collectors.joining("."));
-            String sa = x.fromSubst() == null && x.intoSubst() != null ? " {}" : subst(x.fromSubst());
-            return " " + ref(x.from()) + (x.direction() == Direction.LEFT_TO_RIGHT ? " -> " : " <- ") + ref(x.into())
-                    + " @ " + pos + sa + subst(x.intoSubst());
-        }
-        if (a instanceof EqresArgs x) return " " + ref(x.literal()) + subst(x.subst());
-        if (a instanceof EqfactorArgs x) return " " + ref(x.first()) + ", " + ref(x.second()) + subst(x.subst());
-        return "";
-    }
-
-    private static String ref(LiteralRef r) {
-        return r.label().text() + "." + r.index();
-    }
-
-    private static String subst(RawSubstitution s) {
-        if (s == null) return "";
-        List<String> parts = new ArrayList<>();
-        for (RawBinding b : s.bindings()) parts.add(b.variable().text() + " := " + term(b.term()));
-        return " {" + String.join(", ", parts) + "}";
-    }
-
-    private static String term(RawTerm t) {
-        if (t.args().isEmpty()) return t.name();
-        return t.name() + "(" + t.args().stream().map(ShowCommand::term).collect(Collectors.joining(", ")) + ")";
-    }
 }
