@@ -51,7 +51,27 @@ final class CheckCommand implements Callable<Integer> {
     public Integer call() {
         HtmlReport page = html == null ? null : new HtmlReport();
         Checker checker = new Checker(new Checker.Options(maxDepth));
-        CheckResult r = page == null ? checker.check(problem, certificate) : checker.check(problem, certificate, page);
+        Progress progress = new Progress(spec.commandLine().getErr(), 0, "steps checked");
+        int[] steps = {0};
+        Checker.Listener listener = new Checker.Listener() {
+            @Override
+            public void problem(dev.assay.kernel.Problem p) {
+                if (page != null) page.problem(p);
+            }
+
+            @Override
+            public void step(dev.assay.syntax.Step s, Object conclusion, java.util.List<String> premises) {
+                if (page != null) page.step(s, conclusion, premises);
+                if (!quiet) progress.update(++steps[0]);
+            }
+
+            @Override
+            public void forget(dev.assay.syntax.Forget f) {
+                if (page != null) page.forget(f);
+            }
+        };
+        CheckResult r = checker.check(problem, certificate, listener);
+        progress.finish();
         if (page != null) {
             String date = java.time.OffsetDateTime.now(java.time.ZoneOffset.UTC).withNano(0).toString();
             try {

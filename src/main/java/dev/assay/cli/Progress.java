@@ -22,9 +22,14 @@ final class Progress {
     synchronized void update(int done) {
         if (!enabled) return;
         long now = System.nanoTime();
-        if (done < total && now - lastDraw < 100_000_000L) return;
+        if ((total <= 0 || done < total) && now - lastDraw < 100_000_000L) return;
         lastDraw = now;
         double seconds = Math.max(1e-9, (now - start) / 1e9);
+        if (total <= 0) { // size unknown: a count and a rate
+            out.print("\r" + done + " " + unit + String.format(java.util.Locale.ROOT, ", %.0f/s", done / seconds));
+            out.flush();
+            return;
+        }
         int width = 30;
         int filled = total == 0 ? width : (int) ((long) done * width / total);
         out.print("\r[" + "#".repeat(filled) + " ".repeat(width - filled) + "] " + done + "/" + total + " " + unit
