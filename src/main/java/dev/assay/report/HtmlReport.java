@@ -97,7 +97,9 @@ public final class HtmlReport implements Checker.Listener {
                     "rule", f.rule() == null ? "" : f.rule(), "reason", f.reason(),
                     "stated", f.stated() == null ? "" : f.stated(), "derived", f.derived() == null ? "" : f.derived()));
         }
-        m.put("graph", steps.size() <= GRAPH_LIMIT ? graph(cone) : null);
+        String laidOut = steps.size() <= GRAPH_LIMIT ? graphviz(cone) : null;
+        m.put("graphviz", laidOut);
+        m.put("graph", steps.size() <= GRAPH_LIMIT && laidOut == null ? graph(cone) : null);
         m.put("graphOmitted", steps.size() > GRAPH_LIMIT ? steps.size() : null);
         StringWriter out = new StringWriter();
         TEMPLATE.execute(out, m);
@@ -163,6 +165,69 @@ public final class HtmlReport implements Checker.Listener {
             }
         }
         return Map.of("width", Math.max(width, 200), "height", Math.max(height, 80), "nodes", nodes, "edges", edges);
+    }
+
+    /**
+     * The proof laid out by Graphviz's dot, when it is installed: DOT in, SVG out, embedded inline. Null when dot is
+     * missing, fails or takes more than 20 s (or -Dassay.graphviz=off), and the built-in layered drawing is used.
+     */
+    private String graphviz(Set<String> cone) {
+        if ("off".equals(System.getProperty("assay.graphviz"))) return null;
+        java.nio.file.Path dot = null;
+        for (String dir : System.getenv().getOrDefault("PATH", "/usr/bin").split(java.io.File.pathSeparator)) {
+            java.nio.file.Path candidate = java.nio.file.Path.of(dir, "dot");
+            if (java.nio.file.Files.isExecutable(candidate)) {
+                dot = candidate;
+                break;
+            }
+        }
+        if (dot == null) return null;
+        StringBuilder g = new StringBuilder("digraph proof {\n  rankdir=TB; node [shape=box, style=\"rounded,filled\", "
+                + "fillcolor=white, fontname=\"monospace\", fontsize=10]; edge [color=\"#bbbbbb\"];\n");
+        Set<String> drawn = new HashSet<>();
+        for (Map.Entry<String, List<String>> e : premises.entrySet()) {
+            for (String p : e.getValue()) {
+                if (!premises.containsKey(p) && drawn.add(p)) {
+                    boolean hot = touchesCone(p, cone);
+                    String name = p.startsWith("goal:") ? "not " + p.substring(5) : p;
+                    g.append("  ").append(quote(p)).append(" [label=").append(quote(name)).append(", fillcolor=\"#f4f4f4\"")
+                            .append(hot ? ", color=\"#1565c0\", penwidth=2" : "").append("];\n");
+                }
+            }
+            boolean hot = cone.contains(e.getKey());
+            g.append("  ").append(quote(e.getKey())).append(hot ? " [color=\"#1565c0\", penwidth=2]" : "").append(";\n");
+            for (String p : e.getValue()) {
+                g.append("  ").append(quote(p)).append(" -> ").append(quote(e.getKey()))
+                        .append(hot ? " [color=\"#1565c0\"]" : "").append(";\n");
+            }
+        }
+        g.append("}\n");
+        try {
+            Process proc = new ProcessBuilder(dot.toString(), "-Tsvg").redirectErrorStream(false).start();
+            try (var in = proc.getOutputStream()) {
+                in.write(g.toString().getBytes(java.nio.charset.StandardCharsets.UTF_8));
+            }
+            byte[] svg = proc.getInputStream().readAllBytes();
+            if (!proc.waitFor(20, java.util.concurrent.TimeUnit.SECONDS) || proc.exitValue() != 0) {
+                proc.destroyForcibly();
+                return null;
+            }
+            String text = new String(svg, java.nio.charset.StandardCharsets.UTF_8);
+            int open = text.indexOf("<svg");
+            if (open < 0) return null;
+            // Inline SVG in HTML needs no prolog, doctype or namespace declarations.
+            return text.substring(open).replaceAll(" xmlns(:xlink)?=\"[^\"]*\"", "");
+        } catch (java.io.IOException e) {
+            return null;
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            return null;
+        }
+    }
+
+    /** A DOT identifier: labels and names here are identifiers of the language, quoted all the same. */
+    private static String quote(String s) {
+        return "\"" + s.replace("\\", "\\\\").replace("\"", "\\\"") + "\"";
     }
 
     private boolean touchesCone(String premise, Set<String> cone) {
