@@ -7,6 +7,7 @@ import dev.assay.kernel.Problem;
 import dev.assay.syntax.Forget;
 import dev.assay.syntax.Name;
 import dev.assay.syntax.Step;
+import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
