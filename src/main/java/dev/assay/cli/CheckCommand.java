@@ -41,6 +41,9 @@ final class CheckCommand implements Callable<Integer> {
     @Option(names = "--html", paramLabel = "FILE", description = "also write a self-contained HTML report (for a review file)")
     Path html;
 
+    @Option(names = "--timeout", paramLabel = "SECONDS", description = "stop the check after this long (exit 4); default: none")
+    double timeout;
+
     @Option(names = "--brief", description = "print one line: the verdict, the certificate, and the failure if any")
     boolean brief;
 
@@ -70,7 +73,25 @@ final class CheckCommand implements Callable<Integer> {
                 if (page != null) page.forget(f);
             }
         };
-        CheckResult r = checker.check(problem, certificate, listener);
+        // The checker looks at its thread's interrupt flag between steps; a timer sets it at the limit.
+        Thread self = Thread.currentThread();
+        java.util.Timer alarm = null;
+        if (timeout > 0) {
+            alarm = new java.util.Timer("assay-timeout", true);
+            alarm.schedule(new java.util.TimerTask() {
+                @Override
+                public void run() {
+                    self.interrupt();
+                }
+            }, (long) (timeout * 1000));
+        }
+        CheckResult r;
+        try {
+            r = checker.check(problem, certificate, listener);
+        } finally {
+            if (alarm != null) alarm.cancel();
+            Thread.interrupted();
+        }
         progress.finish();
         if (page != null) {
             String date = java.time.OffsetDateTime.now(java.time.ZoneOffset.UTC).withNano(0).toString();

@@ -94,6 +94,23 @@ class MainTest {
     }
 
     @Test
+    void aTimeLimitStopsTheCheckWithExitFour(@TempDir Path dir) throws Exception {
+        StringBuilder problem = new StringBuilder("problem chain\naxiom start: P0\n");
+        StringBuilder proof = new StringBuilder("certificate for chain\nstep c0: clause P0 by clausify start\n");
+        for (int i = 0; i < 20_000; i++) {
+            problem.append("axiom r").append(i).append(": P").append(i).append(" implies P").append(i + 1).append('\n');
+            proof.append("step d").append(i).append(": clause not P").append(i).append(" or P").append(i + 1)
+                    .append(" by clausify r").append(i).append('\n');
+        }
+        Files.writeString(dir.resolve("c.problem"), problem);
+        Files.writeString(dir.resolve("c.proof"), proof);
+        Run r = run("check", "--timeout", "0.2", dir.resolve("c.problem").toString(), dir.resolve("c.proof").toString());
+        assertEquals(4, r.status(), r.all());
+        assertTrue(r.out().contains("verdict: timeout"), r.out());
+        noStackTrace(r);
+    }
+
+    @Test
     void helpAndVersion() {
         Run h = run("--help");
         assertEquals(0, h.status());
