@@ -78,6 +78,11 @@ final class Variants {
         List<Literal> lb = new ArrayList<>(b.asSet());
         if (la.size() != lb.size()) return false;
         if (la.isEmpty()) return true;
+        // Fast path: certificates usually state a derived clause in the order it was derived. Pairing the literals
+        // in order is one candidate each; when it works the clauses are variants, when not the full search decides.
+        List<List<Literal>> inOrder = new ArrayList<>(lb.size());
+        for (Literal l : lb) inOrder.add(List.of(l));
+        if (new Search(la, inOrder, budget).run()) return true;
         Skeletons sk = new Skeletons();
         Map<Variable, Integer> occA = occurrences(la);
         Map<Variable, Integer> occB = occurrences(lb);
