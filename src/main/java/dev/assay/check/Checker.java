@@ -209,7 +209,7 @@ public final class Checker {
             try (InputStream in = new DigestInputStream(Files.newInputStream(certificatePath), md)) {
                 // Strict UTF-8: bytes that are not UTF-8 are an input error at the byte, not a replacement character.
                 CertificateReader reader = new CertificateReader(certificateFile, in, options.maxDepth());
-                boolean first = true;
+                // The reader enforces the order of the file (the header first and once, the digest right after it).
                 Location last = new Location(certificateFile, 1, 1);
                 CertificateStatement s;
                 while (true) {
@@ -222,21 +222,9 @@ public final class Checker {
                     }
                     if (s == null) break;
                     last = s.at();
-                    if (first) {
-                        first = false;
-                        if (!(s instanceof CertificateHeader h)) {
-                            throw inputError(s.at(), "a certificate starts with 'certificate for <problem name>'");
-                        }
-                        if (!h.problem().text().equals(problem.name())) {
-                            throw inputError(h.problem().at(), "this certificate is for problem " + h.problem().text()
-                                    + " but the problem file is " + problem.name());
-                        }
-                        continue;
-                    }
                     statement(s);
                 }
                 certificateSha = hex(md.digest());
-                if (first) throw inputError(last, "the certificate is empty: it starts with 'certificate for <problem name>'");
                 finish(last);
             } catch (IOException e) {
                 if (e instanceof java.nio.channels.ClosedByInterruptException || Thread.currentThread().isInterrupted()) {
@@ -249,9 +237,11 @@ public final class Checker {
 
         void statement(CertificateStatement s) throws Stop {
             if (s instanceof CertificateHeader h) {
-                throw inputError(h.at(), "a second 'certificate for' header");
+                if (!h.problem().text().equals(problem.name())) {
+                    throw inputError(h.problem().at(), "this certificate is for problem " + h.problem().text()
+                            + " but the problem file is " + problem.name());
+                }
             } else if (s instanceof Digest d) {
-                if (steps > 0 || digest != null) throw inputError(d.at(), "the digest belongs right after the header");
                 if (!d.sha256().equalsIgnoreCase(problemSha)) {
                     digest = "mismatch";
                     throw inputError(d.at(), "the problem file does not match the certificate's digest: the file's"
