@@ -391,39 +391,17 @@ public final class Formulas {
         }
 
         private int term(Term root, Map<Variable, ArrayDeque<Integer>> binders, int depth, Map<Term, Integer> memo) {
-            ArrayDeque<Term> stack = new ArrayDeque<>();
-            stack.push(root);
-            while (!stack.isEmpty()) {
-                Term t = stack.peek();
-                if (memo.containsKey(t)) {
-                    stack.pop();
-                    continue;
-                }
-                if (t instanceof Variable v) {
-                    ArrayDeque<Integer> b = binders.get(v);
-                    memo.put(t, b == null || b.isEmpty() ? intern(FREE, nameId(v)) : intern(BOUND, depth - b.peek()));
-                    stack.pop();
-                    continue;
-                }
-                Application a = (Application) t;
-                int[] data = new int[a.arity() + 2];
+            return Terms.fold(root, memo, t -> {
+                if (!(t instanceof Variable v)) return null;
+                ArrayDeque<Integer> b = binders.get(v);
+                return b == null || b.isEmpty() ? intern(FREE, nameId(v)) : intern(BOUND, depth - b.peek());
+            }, (a, args) -> {
+                int[] data = new int[args.size() + 2];
                 data[0] = APP;
                 data[1] = symbolId(a.symbol());
-                boolean ready = true;
-                for (int i = 0; i < a.arity(); i++) {
-                    Integer c = memo.get(a.argument(i));
-                    if (c == null) {
-                        ready = false;
-                        stack.push(a.argument(i));
-                    } else {
-                        data[i + 2] = c;
-                    }
-                }
-                if (!ready) continue;
-                stack.pop();
-                memo.put(t, intern(data));
-            }
-            return memo.get(root);
+                for (int i = 0; i < args.size(); i++) data[i + 2] = args.get(i);
+                return intern(data);
+            });
         }
     }
 

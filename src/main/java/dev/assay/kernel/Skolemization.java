@@ -557,34 +557,13 @@ final class Skolemization {
 
         private long term(Term root, boolean conclusion) {
             Map<Term, Long> memo = conclusion ? termMemoConclusion : termMemoPremise;
-            ArrayDeque<Term> stack = new ArrayDeque<>();
-            stack.push(root);
-            while (!stack.isEmpty()) {
-                Term t = stack.peek();
-                if (memo.containsKey(t)) {
-                    stack.pop();
-                    continue;
-                }
-                if (t instanceof Variable || (conclusion && fresh.contains(((Application) t).symbol()))) {
-                    memo.put(t, VAR);
-                    stack.pop();
-                    continue;
-                }
-                Application a = (Application) t;
-                boolean ready = true;
-                for (Term arg : a.argumentArray()) {
-                    if (!memo.containsKey(arg)) {
-                        stack.push(arg);
-                        ready = false;
-                    }
-                }
-                if (!ready) continue;
-                stack.pop();
-                long h = a.symbol().hashCode();
-                for (Term arg : a.argumentArray()) h = h * 1_000_003 + memo.get(arg);
-                memo.put(t, h);
-            }
-            return memo.get(root);
+            return Terms.fold(root, memo,
+                    t -> t instanceof Variable || (conclusion && fresh.contains(((Application) t).symbol())) ? (Long) VAR : null,
+                    (a, args) -> {
+                        long h = a.symbol().hashCode();
+                        for (long v : args) h = h * 1_000_003 + v;
+                        return h;
+                    });
         }
     }
 }

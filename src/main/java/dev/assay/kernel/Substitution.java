@@ -48,46 +48,18 @@ public final class Substitution {
         if (bindings.isEmpty() || root.isGround()) return root;
         Term done = memo.get(root);
         if (done != null) return done;
-        // Post-order over the graph: a node is rebuilt once all its arguments are.
-        ArrayDeque<Term> stack = new ArrayDeque<>();
-        stack.push(root);
-        while (!stack.isEmpty()) {
-            Term t = stack.peek();
-            if (memo.containsKey(t)) {
-                stack.pop();
-                continue;
-            }
-            if (t.isGround()) {
-                memo.put(t, t);
-                stack.pop();
-                continue;
-            }
+        return Terms.fold(root, memo, t -> {
+            if (t.isGround()) return t;
             if (t instanceof Variable v) {
                 Term b = bindings.get(v);
-                memo.put(t, b == null ? v : b);
-                stack.pop();
-                continue;
+                return b == null ? v : b;
             }
-            Application a = (Application) t;
-            Term[] args = a.argumentArray();
-            boolean ready = true;
-            for (int i = args.length - 1; i >= 0; i--) {
-                if (!memo.containsKey(args[i])) {
-                    stack.push(args[i]);
-                    ready = false;
-                }
-            }
-            if (!ready) continue;
-            stack.pop();
-            Term[] mapped = new Term[args.length];
-            boolean changed = false;
-            for (int i = 0; i < args.length; i++) {
-                mapped[i] = memo.get(args[i]);
-                changed |= mapped[i] != args[i];
-            }
-            memo.put(a, changed ? terms.application(a.symbol(), mapped) : a);
-        }
-        return memo.get(root);
+            return null;
+        }, (a, args) -> {
+            Term[] mapped = args.toArray(new Term[0]);
+            for (int i = 0; i < mapped.length; i++) if (mapped[i] != a.argument(i)) return terms.application(a.symbol(), mapped);
+            return a;
+        });
     }
 
     public Literal apply(Literal l) {

@@ -1,6 +1,11 @@
 package dev.assay.kernel;
 
 import java.util.ArrayDeque;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+import java.util.function.BiFunction;
+import java.util.function.Function;
 import java.util.Collections;
 import java.util.IdentityHashMap;
 import java.util.Set;
@@ -10,6 +15,46 @@ import java.util.function.Consumer;
 final class Terms {
 
     private Terms() {
+    }
+
+    /**
+     * Computes a value for {@code root} bottom-up over the term graph, once per distinct subterm, without recursion.
+     * {@code leaf} gives the value of a term that is not taken apart (it returns null for an application whose
+     * arguments are to be folded first); {@code node} combines an application with its arguments' values, in order.
+     * {@code memo} holds the values computed so far and may be shared between calls with the same functions.
+     */
+    static <V> V fold(Term root, Map<Term, V> memo, Function<Term, V> leaf, BiFunction<Application, List<V>, V> node) {
+        V known = memo.get(root);
+        if (known != null) return known;
+        ArrayDeque<Term> stack = new ArrayDeque<>();
+        stack.push(root);
+        while (!stack.isEmpty()) {
+            Term t = stack.peek();
+            if (memo.containsKey(t)) {
+                stack.pop();
+                continue;
+            }
+            V value = leaf.apply(t);
+            if (value != null) {
+                memo.put(t, value);
+                stack.pop();
+                continue;
+            }
+            Term[] args = ((Application) t).argumentArray();
+            boolean ready = true;
+            for (int i = args.length - 1; i >= 0; i--) {
+                if (!memo.containsKey(args[i])) {
+                    stack.push(args[i]);
+                    ready = false;
+                }
+            }
+            if (!ready) continue;
+            stack.pop();
+            List<V> values = new ArrayList<>(args.length);
+            for (Term arg : args) values.add(memo.get(arg));
+            memo.put(t, node.apply((Application) t, values));
+        }
+        return memo.get(root);
     }
 
     /** Visits every distinct subterm of {@code root} once, parents before children. */

@@ -28,42 +28,16 @@ final class Variants {
         private final Map<Term, Integer> memo = new IdentityHashMap<>();
 
         int of(Term root) {
-            Integer known = memo.get(root);
-            if (known != null) return known;
-            ArrayDeque<Term> stack = new ArrayDeque<>();
-            stack.push(root);
-            while (!stack.isEmpty()) {
-                Term t = stack.peek();
-                if (memo.containsKey(t)) {
-                    stack.pop();
-                    continue;
-                }
-                if (t instanceof Variable) {
-                    memo.put(t, 0x5bd1e995);
-                    stack.pop();
-                    continue;
-                }
-                Application a = (Application) t;
-                boolean ready = true;
-                for (Term arg : a.argumentArray()) {
-                    if (!memo.containsKey(arg)) {
-                        stack.push(arg);
-                        ready = false;
-                    }
-                }
-                if (!ready) continue;
-                stack.pop();
+            return Terms.fold(root, memo, t -> t instanceof Variable ? 0x5bd1e995 : null, (a, args) -> {
                 int h = a.symbol().hashCode();
                 if (a.isEquation()) {
-                    int x = memo.get(a.argument(0));
-                    int y = memo.get(a.argument(1));
-                    h = h * 31 + (x + y) * 17 + (x ^ y);
-                } else {
-                    for (Term arg : a.argumentArray()) h = h * 31 + memo.get(arg);
+                    int x = args.get(0);
+                    int y = args.get(1);
+                    return h * 31 + (x + y) * 17 + (x ^ y);
                 }
-                memo.put(a, h);
-            }
-            return memo.get(root);
+                for (int v : args) h = h * 31 + v;
+                return h;
+            });
         }
 
         int of(Literal l) {
@@ -136,39 +110,13 @@ final class Variants {
     }
 
     private static long counts(Term root, Map<Variable, Integer> occ, Map<Term, Long> memo) {
-        ArrayDeque<Term> stack = new ArrayDeque<>();
-        stack.push(root);
-        while (!stack.isEmpty()) {
-            Term t = stack.peek();
-            if (memo.containsKey(t)) {
-                stack.pop();
-                continue;
-            }
-            if (t instanceof Variable v) {
-                memo.put(t, (long) occ.get(v) * 0x9E3779B97F4A7C15L);
-                stack.pop();
-                continue;
-            }
-            if (t.isGround()) {
-                memo.put(t, 3L);
-                stack.pop();
-                continue;
-            }
-            Term[] args = ((Application) t).argumentArray();
-            boolean ready = true;
-            for (Term arg : args) {
-                if (!memo.containsKey(arg)) {
-                    stack.push(arg);
-                    ready = false;
-                }
-            }
-            if (!ready) continue;
-            stack.pop();
-            long h = 7;
-            for (Term arg : args) h = h * 131 + memo.get(arg);
-            memo.put(t, h);
-        }
-        return memo.get(root);
+        return Terms.fold(root, memo,
+                t -> t instanceof Variable v ? (Long) ((long) occ.get(v) * 0x9E3779B97F4A7C15L) : t.isGround() ? (Long) 3L : null,
+                (a, args) -> {
+                    long h = 7;
+                    for (long v : args) h = h * 131 + v;
+                    return h;
+                });
     }
 
     /** Backtracking over literal pairings and equation orientations, with an undo trail; no recursion. */
