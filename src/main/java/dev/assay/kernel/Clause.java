@@ -13,8 +13,8 @@ import java.util.Set;
 public final class Clause {
 
     private final List<Literal> literals;
-    private Set<Literal> set;
-    private List<Variable> variables;
+    private volatile Set<Literal> set;
+    private volatile List<Variable> variables;
 
     public Clause(List<Literal> literals) {
         this.literals = List.copyOf(literals);

@@ -2,6 +2,7 @@ package dev.assay.kernel;
 
 import java.util.ArrayList;
 import java.util.HashMap;
+import java.util.HashSet;
 import java.util.LinkedHashMap;
 import java.util.LinkedHashSet;
 import java.util.List;
@@ -313,7 +314,7 @@ public final class Kernel {
         Clause restB = remove(bApart, ljApart);
         return unifyThenCompare(rule, label, stated, atomPairs(li, ljApart),
                 mgu -> union(mgu.apply(restA), mgu.apply(restB)),
-                "the atoms of " + ref(a, i) + " and " + ref(b, j) + ", " + Printer.term(li.atom()) + " and "
+                () -> "the atoms of " + ref(a, i) + " and " + ref(b, j) + ", " + Printer.term(li.atom()) + " and "
                         + Printer.term(lj.atom()) + ", do not unify: ");
     }
 
@@ -344,7 +345,7 @@ public final class Kernel {
             return sameSet(rule, label, stated, sigma.apply(a.clause()));
         }
         return unifyThenCompare(rule, label, stated, atomPairs(li, lj), mgu -> mgu.apply(a.clause()),
-                ref(a, i) + " and " + ref(a, j) + " do not unify: ");
+                () -> ref(a, i) + " and " + ref(a, j) + " do not unify: ");
     }
 
     /** {@code instantiate A σ}: the conclusion is {@code Aσ}. */
@@ -609,19 +610,45 @@ public final class Kernel {
     }
 
     private Outcome symbolsOutside(String rule, Formula f, Clause c, Signature signature, Substitution... subs) {
-        Set<Symbol> used = new LinkedHashSet<>();
-        if (f != null) used.addAll(Formulas.symbols(f));
-        if (c != null) for (Literal l : c.literals()) Formulas.collectSymbols(l.atom(), used);
-        for (Substitution s : subs == null ? new Substitution[0] : subs) {
-            if (s != null) for (Term t : s.bindings().values()) Formulas.collectSymbols(t, used);
-        }
-        for (Symbol s : used) {
-            if (!signature.admits(s)) {
-                Symbol known = signature.lookup(s.name());
-                String why = known == null ? "the symbol " + s + " is not in the signature"
-                        : "the symbol " + s.name() + " is used as " + describe(s) + " but is " + describe(known);
-                return new Outcome.Rejected(rule, why, f != null ? Printer.formula(f) : c != null ? Printer.clause(c) : null, null);
+        // The first symbol, in order of first occurrence, that the signature does not admit.
+        Symbol bad = null;
+        if (f != null) {
+            for (Symbol s : Formulas.symbols(f)) {
+                if (!signature.admits(s)) {
+                    bad = s;
+                    break;
+                }
             }
+        }
+        if (bad == null && c != null) {
+            for (Literal l : c.literals()) if ((bad = firstOutside(l.atom(), signature)) != null) break;
+        }
+        for (Substitution s : subs == null ? new Substitution[0] : subs) {
+            if (bad != null) break;
+            if (s != null) for (Term t : s.bindings().values()) if ((bad = firstOutside(t, signature)) != null) break;
+        }
+        if (bad == null) return null;
+        Symbol known = signature.lookup(bad.name());
+        String why = known == null ? "the symbol " + bad + " is not in the signature"
+                : "the symbol " + bad.name() + " is used as " + describe(bad) + " but is " + describe(known);
+        return new Outcome.Rejected(rule, why, f != null ? Printer.formula(f) : c != null ? Printer.clause(c) : null, null);
+    }
+
+    /** The first symbol of {@code t} (pre-order, equality aside) that {@code signature} does not admit, or null. */
+    private static Symbol firstOutside(Term t, Signature signature) {
+        if (t.treeSize() <= 64) return firstOutsideSmall(t, signature);
+        Set<Symbol> used = new LinkedHashSet<>();
+        Formulas.collectSymbols(t, used);
+        for (Symbol s : used) if (!signature.admits(s)) return s;
+        return null;
+    }
+
+    private static Symbol firstOutsideSmall(Term t, Signature signature) {
+        if (!(t instanceof Application a)) return null;
+        if (!a.isEquation() && !signature.admits(a.symbol())) return a.symbol();
+        for (Term arg : a.argumentArray()) {
+            Symbol s = firstOutsideSmall(arg, signature);
+            if (s != null) return s;
         }
         return null;
     }
@@ -673,7 +700,8 @@ public final class Kernel {
      * conclusion as a variant accepts; otherwise the rejection shows the first derived clause, or why none unified.
      */
     private Outcome unifyThenCompare(String rule, String label, Clause stated, List<Term[]> pairs,
-                                     java.util.function.Function<Substitution, Clause> derive, String notUnifiable) {
+                                     java.util.function.Function<Substitution, Clause> derive,
+                                     java.util.function.Supplier<String> notUnifiable) {
         String failure = null;
         Clause firstDerived = null;
         for (Term[] pair : pairs) {
@@ -687,7 +715,7 @@ public final class Kernel {
             }
         }
         if (firstDerived != null) return notVariant(rule, stated, firstDerived);
-        return reject(rule, notUnifiable + failure, Printer.clause(stated), null);
+        return reject(rule, notUnifiable.get() + failure, Printer.clause(stated), null);
     }
 
     /** The ways two atoms can be set equal: as written, and for two equations also with one side swapped. */
@@ -705,13 +733,20 @@ public final class Kernel {
      * so the two share no variable and messages still show the certificate's own names.
      */
     Clause renameApart(Clause b, Clause a) {
-        Set<Variable> taken = new LinkedHashSet<>(a.variables());
         List<Variable> own = b.variables();
-        taken.addAll(own);
-        Map<Variable, Term> renaming = new LinkedHashMap<>();
+        List<Variable> theirs = a.variables();
+        if (own.isEmpty() || theirs.isEmpty()) return b;
+        Set<Variable> inA = theirs.size() > 8 ? new HashSet<>(theirs) : null;
+        Set<Variable> taken = null;
+        Map<Variable, Term> renaming = null;
         for (Variable v : own) {
-            if (!a.variables().contains(v)) continue;
-            String base = v.name().replaceAll("[0-9]+$", "");
+            if (!(inA != null ? inA.contains(v) : theirs.contains(v))) continue;
+            if (taken == null) {
+                taken = new HashSet<>(theirs);
+                taken.addAll(own);
+                renaming = new LinkedHashMap<>();
+            }
+            String base = withoutTrailingDigits(v.name());
             for (int k = 1; ; k++) {
                 Variable candidate = terms.variable(base + k);
                 if (taken.add(candidate)) {
@@ -720,6 +755,12 @@ public final class Kernel {
                 }
             }
         }
-        return new Substitution(terms, renaming).apply(b);
+        return renaming == null ? b : new Substitution(terms, renaming).apply(b);
+    }
+
+    private static String withoutTrailingDigits(String name) {
+        int end = name.length();
+        while (end > 0 && Character.isDigit(name.charAt(end - 1)) && name.charAt(end - 1) < 128) end--;
+        return name.substring(0, end);
     }
 }

@@ -76,6 +76,10 @@ final class Terms {
     /** Adds the variables of {@code root} to {@code into}, in left-to-right order of first occurrence. */
     static void collectVariables(Term root, Set<Variable> into) {
         if (root.isGround()) return;
+        if (root.treeSize() <= 64) {
+            collectSmall(root, into);
+            return;
+        }
         Set<Term> seen = Collections.newSetFromMap(new IdentityHashMap<>());
         ArrayDeque<Term> stack = new ArrayDeque<>();
         stack.push(root);
@@ -89,6 +93,16 @@ final class Terms {
                 for (int i = args.length - 1; i >= 0; i--) stack.push(args[i]);
             }
         }
+    }
+
+    /** {@link #collectVariables} on a small tree: pre-order, left to right, without a visited set. */
+    private static void collectSmall(Term t, Set<Variable> into) {
+        if (t.isGround()) return;
+        if (t instanceof Variable v) {
+            into.add(v);
+            return;
+        }
+        for (Term arg : ((Application) t).argumentArray()) collectSmall(arg, into);
     }
 
     /** Whether {@code v} occurs in {@code t}. */

@@ -3,6 +3,7 @@ package dev.assay.kernel;
 import java.util.ArrayDeque;
 import java.util.ArrayList;
 import java.util.HashMap;
+import java.util.IdentityHashMap;
 import java.util.LinkedHashMap;
 import java.util.LinkedHashSet;
 import java.util.List;
@@ -76,10 +77,16 @@ public final class Unification {
 
     private static final class Solver {
         private final TermFactory terms;
-        private final Map<Term, Term> parent = new HashMap<>();
-        private final Map<Term, Integer> rank = new HashMap<>();
-        private final Map<Term, Application> schema = new HashMap<>();
-        private final Map<Term, Variable> memberVariable = new HashMap<>();
+        /** The union-find record of a term that has been merged; terms never merged have none. */
+        private static final class Node {
+            Term parent;
+            int rank;
+            Application schema;
+            Variable variable;
+        }
+
+        /** Keyed by identity: terms are hash-consed, so equal terms are the same object. */
+        private final Map<Term, Node> nodes = new IdentityHashMap<>();
         private final Map<Variable, Path> boundAt = new HashMap<>();
 
         Solver(TermFactory terms) {
@@ -88,40 +95,47 @@ public final class Unification {
 
         Term find(Term t) {
             Term root = t;
-            for (Term p = parent.get(root); p != null; p = parent.get(root)) root = p;
+            for (Node n = nodes.get(root); n != null && n.parent != null; n = nodes.get(root)) root = n.parent;
             // Path compression.
             Term cur = t;
             while (cur != root) {
-                Term next = parent.get(cur);
-                parent.put(cur, root);
+                Node n = nodes.get(cur);
+                Term next = n.parent;
+                n.parent = root;
                 cur = next;
             }
             return root;
         }
 
         Application schemaOf(Term root) {
-            Application a = schema.get(root);
-            if (a != null) return a;
+            Node n = nodes.get(root);
+            if (n != null && n.schema != null) return n.schema;
             return root instanceof Application app ? app : null;
         }
 
         Variable variableOf(Term root) {
-            Variable v = memberVariable.get(root);
-            if (v != null) return v;
+            Node n = nodes.get(root);
+            if (n != null && n.variable != null) return n.variable;
             return root instanceof Variable var ? var : null;
         }
 
+        private Node node(Term t) {
+            return nodes.computeIfAbsent(t, k -> new Node());
+        }
+
         void union(Term a, Term b) {
-            int ra = rank.getOrDefault(a, 0);
-            int rb = rank.getOrDefault(b, 0);
-            Term top = ra >= rb ? a : b;
-            Term low = top == a ? b : a;
-            Application sch = schemaOf(top) != null ? schemaOf(top) : schemaOf(low);
-            Variable var = variableOf(top) != null ? variableOf(top) : variableOf(low);
-            parent.put(low, top);
-            if (ra == rb) rank.put(top, ra + 1);
-            if (sch != null) schema.put(top, sch);
-            if (var != null) memberVariable.put(top, var);
+            Node na = node(a);
+            Node nb = node(b);
+            Node top = na.rank >= nb.rank ? na : nb;
+            Term topTerm = top == na ? a : b;
+            Term lowTerm = top == na ? b : a;
+            Node low = top == na ? nb : na;
+            Application sch = schemaOf(topTerm) != null ? schemaOf(topTerm) : schemaOf(lowTerm);
+            Variable var = variableOf(topTerm) != null ? variableOf(topTerm) : variableOf(lowTerm);
+            low.parent = topTerm;
+            if (na.rank == nb.rank) top.rank++;
+            if (sch != null) top.schema = sch;
+            if (var != null) top.variable = var;
         }
 
         Result solve(List<Term[]> pairs) {
@@ -149,8 +163,12 @@ public final class Unification {
                     union(rl, rr);
                 }
             }
-            NotUnifiable cycle = occursCheck(pairs);
-            if (cycle != null) return cycle;
+            // A cycle needs a class holding both a variable and an application, and every merge that makes one
+            // records the variable in boundAt; with none, the graph is acyclic.
+            if (!boundAt.isEmpty()) {
+                NotUnifiable cycle = occursCheck(pairs);
+                if (cycle != null) return cycle;
+            }
             return new Unified(build(pairs));
         }
 
