@@ -72,9 +72,36 @@ public final class Checker {
     public static final List<String> RULES = List.of("negate", "nnf", "skolemize", "clausify", "define", "abbreviate",
             "resolve", "factor", "instantiate", "paramodulate", "eqres", "eqfactor", "reflexivity");
 
-    public record Options(int maxDepth) {
+    /**
+     * Limits and threads. Each limit, when reached, ends the check with an input error that names it and the option
+     * that raises it. {@code threads} 1 reads and checks on the calling thread; 2 or more read the certificate ahead
+     * on a thread of its own. The verdict and the report do not depend on it.
+     */
+    public record Options(int maxDepth, long maxInputBytes, long maxTermSize, long maxSteps, int threads) {
+        public static final long DEFAULT_MAX_INPUT_BYTES = 16L << 30;
+        public static final long DEFAULT_MAX_TERM_SIZE = 10_000_000L;
+        public static final long DEFAULT_MAX_STEPS = 200_000_000L;
+
+        public Options {
+            if (maxDepth < 1 || maxInputBytes < 1 || maxTermSize < 1 || maxSteps < 1 || threads < 1) {
+                throw new IllegalArgumentException("limits and threads must be positive");
+            }
+        }
+
+        public Options(int maxDepth) {
+            this(maxDepth, DEFAULT_MAX_INPUT_BYTES, DEFAULT_MAX_TERM_SIZE, DEFAULT_MAX_STEPS, defaultThreads());
+        }
+
         public static Options defaults() {
             return new Options(ProblemReader.DEFAULT_MAX_DEPTH);
+        }
+
+        public static int defaultThreads() {
+            return Math.min(2, Runtime.getRuntime().availableProcessors());
+        }
+
+        public Options withThreads(int n) {
+            return new Options(maxDepth, maxInputBytes, maxTermSize, maxSteps, n);
         }
     }
 
@@ -100,8 +127,8 @@ public final class Checker {
         }
     }
 
-    /** What the check tracks per step for the cone. */
-    private record Node(String label, String rule, List<String> premises) {
+    /** A step that may still be used as a premise. */
+    private record Live(Fact fact, int id, int line, int column) {
     }
 
     /** Told of the problem and of each step as the checker understood it, for re-printing. */
@@ -130,6 +157,51 @@ public final class Checker {
         public void forget(Forget forget) {
         }
     };
+
+    /** What reading alone found: the statements of both files, their bytes, the time, or the input error. */
+    public record Parsed(long statements, long bytes, long nanos, Failure failure) {
+    }
+
+    /**
+     * Reads both files as a check does (the same readers and limits, on the calling thread) without resolving names
+     * or calling the kernel, so that the cost of parsing can be measured apart from checking.
+     */
+    public Parsed parse(Path problemPath, Path certificatePath) {
+        long start = System.nanoTime();
+        String pf = problemPath.toString();
+        String cf = certificatePath.toString();
+        long statements = 0;
+        long bytes = 0;
+        try {
+            for (Path p : List.of(problemPath, certificatePath)) {
+                long size = Files.size(p);
+                if (size > options.maxInputBytes()) {
+                    return new Parsed(statements, bytes, System.nanoTime() - start, new Failure(p.toString(), 1, 1, null,
+                            null, "the file has " + size + " bytes, more than the input size limit of "
+                            + options.maxInputBytes() + " (raise it with --max-input-size)", null, null, null));
+                }
+                bytes += size;
+            }
+            try (ProblemReader reader = new ProblemReader(pf, Files.newInputStream(problemPath), options.maxDepth(),
+                    options.maxTermSize())) {
+                while (reader.next() != null) statements++;
+            }
+            try (CertificateSource source = CertificateSource.open(cf, certificatePath, options.maxDepth(),
+                    options.maxTermSize(), false)) {
+                while (source.next() != null) statements++;
+            }
+        } catch (InputError e) {
+            Location at = e.at();
+            return new Parsed(statements, bytes, System.nanoTime() - start, new Failure(at.file(), at.line(),
+                    at.column(), null, null, e.reason(), null, null, null));
+        } catch (IOException | InterruptedException e) {
+            String file = e instanceof IOException io && io.getMessage() != null && io.getMessage().contains(pf) ? pf : cf;
+            return new Parsed(statements, bytes, System.nanoTime() - start, new Failure(file, 1, 1, null, null,
+                    "cannot read the file: " + (e instanceof IOException io ? describe(io) : "interrupted"),
+                    null, null, null));
+        }
+        return new Parsed(statements, bytes, System.nanoTime() - start, null);
+    }
 
     public CheckResult check(Path problemPath, Path certificatePath) {
         return check(problemPath, certificatePath, SILENT);
@@ -161,17 +233,25 @@ public final class Checker {
         Kernel kernel;
         Problem problem;
         Resolver resolver;
-        final Map<String, Fact> facts = new HashMap<>();
-        final Map<String, Location> labels = new HashMap<>();
-        final Map<String, Location> forgotten = new HashMap<>();
-        final Map<String, Node> nodes = new HashMap<>();
+        /** Steps not forgotten, by label. */
+        final Map<String, Live> live = new HashMap<>();
+        /** Forgotten steps: where each was written and where it was forgotten. */
+        final LabelTable forgotten = new LabelTable();
+        /** Premises of every step up to the first empty clause. */
+        final ProofGraph graph = new ProofGraph();
+        final Map<String, Integer> axiomIndex = new HashMap<>();
         final Map<String, Integer> byRule = new LinkedHashMap<>();
+        /** The premises of the step being checked: graph numbers, and names when a listener wants them. */
+        int[] premiseIds = new int[4];
+        int premiseCount;
+        List<String> premiseNames;
         int steps;
         String refutation;
         List<String> used = List.of();
         List<String> unused = List.of();
         boolean goalUsed;
         int coneSize;
+        ProofGraph.Cone cone;
         Listener listener = SILENT;
 
         State(String problemFile, String certificateFile) {
@@ -182,6 +262,7 @@ public final class Checker {
         void run(Path problemPath, Path certificatePath) throws Stop {
             byte[] problemBytes;
             try {
+                sizeLimit(problemFile, problemPath, "problem");
                 problemBytes = Files.readAllBytes(problemPath);
             } catch (IOException e) {
                 throw inputError(problemFile, "cannot read the problem file: " + describe(e));
@@ -192,7 +273,7 @@ public final class Checker {
             try {
                 List<dev.assay.syntax.ProblemStatement> statements = new ArrayList<>();
                 try (ProblemReader reader = new ProblemReader(problemFile,
-                        new java.io.ByteArrayInputStream(problemBytes), options.maxDepth())) {
+                        new java.io.ByteArrayInputStream(problemBytes), options.maxDepth(), options.maxTermSize())) {
                     for (var st = reader.next(); st != null; st = reader.next()) statements.add(st);
                 }
                 problem = resolver.problem(statements);
@@ -202,36 +283,57 @@ public final class Checker {
                 throw inputError(problemFile, "cannot read the problem file: " + describe(e));
             }
             problemName = problem.name();
+            int k = 0;
+            for (String a : problem.axioms().keySet()) axiomIndex.put(a, k++);
             listener.problem(problem);
+            if (listener != SILENT) premiseNames = new ArrayList<>();
             if (certificatePath == null) return;
             kernel = new Kernel(problem, terms);
-            MessageDigest md = newDigest();
-            try (InputStream in = new DigestInputStream(Files.newInputStream(certificatePath), md)) {
-                // Strict UTF-8: bytes that are not UTF-8 are an input error at the byte, not a replacement character.
-                CertificateReader reader = new CertificateReader(certificateFile, in, options.maxDepth());
+            CertificateSource source;
+            try {
+                sizeLimit(certificateFile, certificatePath, "certificate");
+                source = CertificateSource.open(certificateFile, certificatePath, options.maxDepth(),
+                        options.maxTermSize(), options.threads() > 1);
+            } catch (IOException e) {
+                throw inputError(certificateFile, "cannot read the certificate file: " + describe(e));
+            }
+            try (source) {
                 // The reader enforces the order of the file (the header first and once, the digest right after it).
                 Location last = new Location(certificateFile, 1, 1);
                 CertificateStatement s;
                 while (true) {
                     try {
-                        s = reader.next();
+                        s = source.next();
                     } catch (InputError e) {
-                        drain(in);
-                        certificateSha = hex(md.digest());
+                        certificateSha = source.sha256();
                         throw inputError(e);
                     }
                     if (s == null) break;
                     last = s.at();
                     statement(s);
                 }
-                certificateSha = hex(md.digest());
+                certificateSha = source.sha256();
                 finish(last);
+            } catch (InterruptedException e) {
+                throw stopped();
             } catch (IOException e) {
                 if (e instanceof java.nio.channels.ClosedByInterruptException || Thread.currentThread().isInterrupted()) {
-                    throw new Stop(Verdict.TIMEOUT, new Failure(certificateFile, 1, 1, null, null,
-                            "the check was stopped at its time limit while reading the certificate", null, null, null));
+                    throw stopped();
                 }
                 throw inputError(certificateFile, "cannot read the certificate file: " + describe(e));
+            }
+        }
+
+        private Stop stopped() {
+            return new Stop(Verdict.TIMEOUT, new Failure(certificateFile, 1, 1, null, null,
+                    "the check was stopped at its time limit while reading the certificate", null, null, null));
+        }
+
+        private void sizeLimit(String file, Path path, String what) throws IOException, Stop {
+            long size = Files.size(path);
+            if (size > options.maxInputBytes()) {
+                throw inputError(file, "the " + what + " file has " + size + " bytes, more than the input size limit of "
+                        + options.maxInputBytes() + " (raise it with --max-input-size)");
             }
         }
 
@@ -250,16 +352,25 @@ public final class Checker {
                 digest = "matched";
             } else if (s instanceof Forget f) {
                 for (Name n : f.labels()) {
-                    if (!labels.containsKey(n.text())) {
+                    Live l = live.remove(n.text());
+                    if (l != null) {
+                        forgotten.add(n.text(), l.line(), l.column(), n.at().line(), n.at().column());
+                    } else if (forgotten.positions(n.text()) == null) {
                         throw reject(n.at(), null, "forget", "forget names " + n.text() + ", which is not an earlier step");
                     }
-                    facts.remove(n.text());
-                    forgotten.putIfAbsent(n.text(), n.at());
                 }
                 listener.forget(f);
             } else {
                 step((Step) s);
             }
+        }
+
+        /** Where a step of this label was written, or null when there is none yet. */
+        private Location written(String label) {
+            Live l = live.get(label);
+            if (l != null) return new Location(certificateFile, l.line(), l.column());
+            int[] p = forgotten.positions(label);
+            return p == null ? null : new Location(certificateFile, p[0], p[1]);
         }
 
         void step(Step s) throws Stop {
@@ -269,18 +380,23 @@ public final class Checker {
             }
             String label = s.label().text();
             String rule = s.args().ruleName();
-            Location before = labels.get(label);
+            if (steps >= options.maxSteps()) {
+                throw inputError(s.at(), "the certificate has more than " + options.maxSteps()
+                        + " steps, the step count limit (raise it with --max-steps)");
+            }
+            Location before = written(label);
             if (before != null) {
                 throw reject(s.label().at(), label, rule, "the label " + label + " is used twice (first at " + before + ")");
             }
-            if (problem.axioms().containsKey(label) || label.equals(problem.goalName())) {
+            if (axiomIndex.containsKey(label) || label.equals(problem.goalName())) {
                 throw reject(s.label().at(), label, rule, "the label " + label + " is the name of a problem "
                         + (label.equals(problem.goalName()) ? "goal" : "axiom"));
             }
-            List<String> premises = new ArrayList<>();
+            premiseCount = 0;
+            if (premiseNames != null) premiseNames.clear();
             Outcome o;
             try {
-                o = apply(s, label, premises);
+                o = apply(s, label, premiseNames);
             } catch (InputError e) {
                 throw inputError(e);
             } catch (StepProblem p) {
@@ -291,15 +407,26 @@ public final class Checker {
                         s.rule().at().column(), label, r.rule(), r.reason(), r.stated(), r.derived(), null));
             }
             Fact fact = ((Outcome.Accepted) o).fact();
-            steps++;
+            int id = steps++;
             byRule.merge(rule, 1, Integer::sum);
-            labels.put(label, s.label().at());
-            facts.put(label, fact);
-            nodes.put(label, new Node(label, rule, premises));
-            List<String> named = new ArrayList<>();
-            for (String p : premises) named.add(p.startsWith("axiom:") ? p.substring(6) : p);
-            listener.step(s, fact.isClause() ? fact.clause() : fact.formula(), named);
-            if (refutation == null && fact.isEmptyClause()) refutation = label;
+            live.put(label, new Live(fact, id, s.label().at().line(), s.label().at().column()));
+            if (refutation == null) {
+                graph.add(premiseIds, premiseCount);
+                if (fact.isEmptyClause()) {
+                    refutation = label;
+                    cone = graph.cone();
+                }
+            }
+            if (premiseNames != null) {
+                List<String> named = new ArrayList<>(premiseNames.size());
+                for (String p : premiseNames) named.add(p.startsWith("axiom:") ? p.substring(6) : p);
+                listener.step(s, fact.isClause() ? fact.clause() : fact.formula(), named);
+            }
+        }
+
+        private void premiseId(int id) {
+            if (premiseCount == premiseIds.length) premiseIds = java.util.Arrays.copyOf(premiseIds, premiseCount * 2);
+            premiseIds[premiseCount++] = id;
         }
 
         private Outcome apply(Step s, String label, List<String> premises) throws Stop, InputError, StepProblem {
@@ -312,7 +439,8 @@ public final class Checker {
                     throw reject(g.at(), label, rule, g.text() + " is not the problem's goal"
                             + (problem.goal() == null ? " (the problem has none)" : " (" + problem.goalName() + ")"));
                 }
-                premises.add("goal:" + g.text());
+                premiseId(ProofGraph.GOAL);
+                if (premises != null) premises.add("goal:" + g.text());
                 return kernel.negate(label, g.text(), formula(s, sig, List.of()));
             }
             if (args instanceof NnfArgs a) {
@@ -419,18 +547,21 @@ public final class Checker {
 
         private Fact premise(Name n, String label, String rule, List<String> premises) throws Stop {
             String name = n.text();
-            Fact f = facts.get(name);
-            if (f != null) {
-                premises.add(name);
-                return f;
+            Live l = live.get(name);
+            if (l != null) {
+                premiseId(l.id());
+                if (premises != null) premises.add(name);
+                return l.fact();
             }
-            if (forgotten.containsKey(name)) {
-                throw reject(n.at(), label, rule, name + " was forgotten at " + forgotten.get(name)
-                        + " and cannot be used again");
+            int[] gone = forgotten.positions(name);
+            if (gone != null) {
+                throw reject(n.at(), label, rule, name + " was forgotten at "
+                        + new Location(certificateFile, gone[2], gone[3]) + " and cannot be used again");
             }
             Fact ax = kernel.axiom(name);
             if (ax != null) {
-                premises.add("axiom:" + name);
+                premiseId(ProofGraph.axiom(axiomIndex.get(name)));
+                if (premises != null) premises.add("axiom:" + name);
                 return ax;
             }
             if (name.equals(problem.goalName())) {
@@ -445,24 +576,12 @@ public final class Checker {
             if (refutation == null) {
                 throw reject(last, null, null, "no step derives the empty clause false, so nothing is refuted");
             }
-            // The cone: every step the first empty clause rests on.
-            Set<String> seen = new HashSet<>();
-            Set<String> axiomsInCone = new HashSet<>();
-            ArrayDeque<String> todo = new ArrayDeque<>();
-            todo.push(refutation);
-            seen.add(refutation);
-            while (!todo.isEmpty()) {
-                Node n = nodes.get(todo.pop());
-                for (String p : n.premises()) {
-                    if (p.startsWith("axiom:")) axiomsInCone.add(p.substring(6));
-                    else if (p.startsWith("goal:")) goalUsed = true;
-                    else if (seen.add(p)) todo.push(p);
-                }
-            }
-            coneSize = seen.size();
+            // The cone: every step the first empty clause rests on (computed when that step was accepted).
+            goalUsed = cone.goal();
+            coneSize = cone.steps();
             List<String> u = new ArrayList<>();
             List<String> nu = new ArrayList<>();
-            for (String a : problem.axioms().keySet()) (axiomsInCone.contains(a) ? u : nu).add(a);
+            for (String a : problem.axioms().keySet()) (cone.axioms().get(axiomIndex.get(a)) ? u : nu).add(a);
             used = u;
             unused = nu;
             if (problem.goal() == null) verdict = Verdict.UNSATISFIABLE;
@@ -515,29 +634,8 @@ public final class Checker {
         return e.getClass().getSimpleName() + (e.getMessage() == null ? "" : ": " + e.getMessage());
     }
 
-    private static void drain(InputStream in) {
-        try {
-            in.transferTo(java.io.OutputStream.nullOutputStream());
-        } catch (IOException ignored) {
-            // The digest of a file that stops being readable is not reported.
-        }
-    }
-
-    private static MessageDigest newDigest() {
-        try {
-            return MessageDigest.getInstance("SHA-256");
-        } catch (NoSuchAlgorithmException e) {
-            throw new IllegalStateException("SHA-256 is not available", e);
-        }
-    }
-
     static String sha256(byte[] bytes) {
-        return hex(newDigest().digest(bytes));
+        return CertificateSource.hex(CertificateSource.newDigest().digest(bytes));
     }
 
-    private static String hex(byte[] digest) {
-        StringBuilder sb = new StringBuilder(64);
-        for (byte b : digest) sb.append(String.format("%02x", b));
-        return sb.toString();
-    }
 }

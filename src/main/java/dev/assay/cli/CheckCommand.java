@@ -20,7 +20,7 @@ import java.util.concurrent.Callable;
 @Command(name = "check", mixinStandardHelpOptions = true,
         description = {"Checks CERTIFICATE against PROBLEM and prints the verdict.",
                 "Every step is re-derived by the kernel; the first failure is reported with its location."},
-        footer = {"", "Exit status: 0 theorem or unsatisfiable, 3 vacuous, 1 rejected, 2 input error."})
+        footer = {"", "Exit status: 0 theorem or unsatisfiable, 3 vacuous, 1 rejected, 2 input error or a limit reached, 4 time limit."})
 final class CheckCommand implements Callable<Integer> {
 
     @Spec
@@ -47,13 +47,19 @@ final class CheckCommand implements Callable<Integer> {
     @Option(names = "--brief", description = "print one line: the verdict, the certificate, and the failure if any")
     boolean brief;
 
-    @Option(names = "--max-depth", paramLabel = "N", description = "nesting depth allowed in the input (default: ${DEFAULT-VALUE})")
-    int maxDepth = Checker.Options.defaults().maxDepth();
+    @Option(names = "--parse-only", description = "only read both files (no kernel work) and print how long that took")
+    boolean parseOnly;
+
+    @picocli.CommandLine.Mixin
+    LimitOptions limits = new LimitOptions();
 
     @Override
     public Integer call() {
+        Checker.Options options = limits.options(spec.commandLine().getErr());
+        if (options == null) return 2;
+        if (parseOnly) return parseOnly(new Checker(options));
         HtmlReport page = html == null ? null : new HtmlReport();
-        Checker checker = new Checker(new Checker.Options(maxDepth));
+        Checker checker = new Checker(options);
         Progress progress = new Progress(spec.commandLine().getErr(), 0, "steps checked");
         int[] steps = {0};
         Checker.Listener listener = new Checker.Listener() {
@@ -121,5 +127,22 @@ final class CheckCommand implements Callable<Integer> {
         }
         spec.commandLine().getOut().flush();
         return r.exitStatus();
+    }
+
+    private int parseOnly(Checker checker) {
+        Checker.Parsed p = checker.parse(problem, certificate);
+        var out = spec.commandLine().getOut();
+        if (p.failure() != null) {
+            if (!quiet) out.println("input error " + p.failure().render());
+            out.flush();
+            return 2;
+        }
+        double s = p.nanos() / 1e9;
+        if (!quiet) {
+            out.printf(java.util.Locale.ROOT, "parsed %d statements, %d bytes in %.3f s (%.0f statements/s, %.1f MB/s)%n",
+                    p.statements(), p.bytes(), s, p.statements() / Math.max(s, 1e-9), p.bytes() / 1e6 / Math.max(s, 1e-9));
+        }
+        out.flush();
+        return 0;
     }
 }

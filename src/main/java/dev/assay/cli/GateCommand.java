@@ -50,8 +50,8 @@ final class GateCommand implements Callable<Integer> {
     @Option(names = "--shard", paramLabel = "K/N", description = "check only shard K of N (every N-th case, from the K-th)")
     String shard;
 
-    @Option(names = "--max-depth", paramLabel = "N", description = "nesting depth allowed in the input (default: ${DEFAULT-VALUE})")
-    int maxDepth = Checker.Options.defaults().maxDepth();
+    @picocli.CommandLine.Mixin
+    LimitOptions limits = new LimitOptions();
 
     @Override
     public Integer call() {
@@ -94,8 +94,10 @@ final class GateCommand implements Callable<Integer> {
                 return 2;
             }
         }
+        Checker.Options options = limits.options(err);
+        if (options == null) return 2;
         Progress progress = new Progress(err, pairs.size(), "cases");
-        List<GateCase> cases = new Gate(jobs, (long) (timeout * 1000), new Checker.Options(maxDepth))
+        List<GateCase> cases = new Gate(jobs, (long) (timeout * 1000), options)
                 .run(pairs, progress::update);
         progress.finish();
         out.print(GateReport.table(cases, true));

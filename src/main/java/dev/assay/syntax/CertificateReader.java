@@ -55,6 +55,11 @@ public final class CertificateReader implements Closeable {
         this(file, Utf8.of(input), maxDepth);
     }
 
+    /** As {@link #CertificateReader(String, InputStream, int)}, with at most {@code maxTermSize} symbol occurrences per statement. */
+    public CertificateReader(String file, InputStream input, int maxDepth, long maxTermSize) {
+        this.stream = new StatementStream<>(file, Utf8.of(input), maxDepth, maxTermSize, LANGUAGE);
+    }
+
     /** Opens a file, read as UTF-8; bytes that are not UTF-8 are an {@link InputError} when reached. */
     public static CertificateReader open(Path file) throws IOException {
         return open(file, DEFAULT_MAX_DEPTH);

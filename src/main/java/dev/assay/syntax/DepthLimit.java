@@ -24,13 +24,24 @@ final class DepthLimit {
     private int level;
     private int open;
     private int deepest;
+    /** The most symbol occurrences (term nodes) one statement may have. */
+    private final long termLimit;
+    private long termNodes;
 
     DepthLimit(String file, int limit, GrammarRule[] rules) {
+        this(file, limit, Long.MAX_VALUE, rules);
+    }
+
+    DepthLimit(String file, int limit, long termLimit, GrammarRule[] rules) {
         if (limit < 1) {
             throw new IllegalArgumentException("the nesting limit must be positive: " + limit);
         }
+        if (termLimit < 1) {
+            throw new IllegalArgumentException("the term size limit must be positive: " + termLimit);
+        }
         this.file = file;
         this.limit = limit;
+        this.termLimit = termLimit;
         this.rules = rules;
     }
 
@@ -38,6 +49,7 @@ final class DepthLimit {
         level = 0;
         open = 0;
         deepest = 0;
+        termNodes = 0;
     }
 
     int limit() {
@@ -59,8 +71,15 @@ final class DepthLimit {
                 yield next == AssayLexer.NOT || next == AssayLexer.FORALL || next == AssayLexer.EXISTS
                         || next == AssayLexer.LPAREN;
             }
-            case TERM -> tokens.LA(2) == AssayLexer.LPAREN && ctx.getParent() != null
-                    && rules[ctx.getParent().getRuleIndex()] == GrammarRule.TERM;
+            case TERM -> {
+                if (++termNodes > termLimit) {
+                    throw new SyntaxFailure(new InputError(SyntaxErrors.locationOf(file, ctx.start),
+                            "this statement has more than " + termLimit + " symbol occurrences, the term size limit"
+                                    + " (raise it with --max-term-size)"));
+                }
+                yield tokens.LA(2) == AssayLexer.LPAREN && ctx.getParent() != null
+                        && rules[ctx.getParent().getRuleIndex()] == GrammarRule.TERM;
+            }
             default -> false;
         };
         frames[level] = counts;

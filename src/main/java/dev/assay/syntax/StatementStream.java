@@ -77,6 +77,11 @@ final class StatementStream<P extends Parser, S> {
     private boolean ended;
 
     StatementStream(String file, Reader input, int maxDepth, Language<P, S> language) {
+        this(file, input, maxDepth, Long.MAX_VALUE, language);
+    }
+
+    /** {@code maxTermSize} bounds the symbol occurrences of one statement. */
+    StatementStream(String file, Reader input, int maxDepth, long maxTermSize, Language<P, S> language) {
         this.file = file;
         this.maxDepth = maxDepth;
         this.language = language;
@@ -86,7 +91,7 @@ final class StatementStream<P extends Parser, S> {
         // The window of the char stream holds only the current token's characters: tokens copy theirs.
         lexer.setTokenFactory(new TokenTexts(chars));
         this.rules = GrammarRule.tableFor(language.ruleNames());
-        this.depth = new DepthLimit(file, maxDepth, rules);
+        this.depth = new DepthLimit(file, maxDepth, maxTermSize, rules);
         this.builder = new RawBuilder(file, rules, maxDepth);
         this.reporting = new SyntaxErrors(file, rules);
     }
