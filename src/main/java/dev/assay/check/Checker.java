@@ -216,6 +216,12 @@ public final class Checker {
         } catch (Stop s) {
             st.verdict = s.verdict;
             st.failure = s.failure;
+        } catch (java.io.UncheckedIOException e) {
+            st.verdict = Verdict.INPUT_ERROR;
+            st.failure = new Failure(st.certificateFile, 1, 1, null, null, e.getMessage() + ": " + describe(e.getCause()),
+                    null, null, null);
+        } finally {
+            st.graph.close();
         }
         long ms = (System.nanoTime() - start) / 1_000_000;
         return st.result(ms);
@@ -252,6 +258,9 @@ public final class Checker {
         boolean goalUsed;
         int coneSize;
         ProofGraph.Cone cone;
+        /** The statement being checked, and the certificate file (read again only to locate a forgotten label). */
+        Location current;
+        Path certificatePath;
         Listener listener = SILENT;
 
         State(String problemFile, String certificateFile) {
@@ -288,6 +297,7 @@ public final class Checker {
             listener.problem(problem);
             if (listener != SILENT) premiseNames = new ArrayList<>();
             if (certificatePath == null) return;
+            this.certificatePath = certificatePath;
             kernel = new Kernel(problem, terms);
             CertificateSource source;
             try {
@@ -338,6 +348,7 @@ public final class Checker {
         }
 
         void statement(CertificateStatement s) throws Stop {
+            current = s.at();
             if (s instanceof CertificateHeader h) {
                 if (!h.problem().text().equals(problem.name())) {
                     throw inputError(h.problem().at(), "this certificate is for problem " + h.problem().text()
@@ -354,8 +365,8 @@ public final class Checker {
                 for (Name n : f.labels()) {
                     Live l = live.remove(n.text());
                     if (l != null) {
-                        forgotten.add(n.text(), l.line(), l.column(), n.at().line(), n.at().column());
-                    } else if (forgotten.positions(n.text()) == null) {
+                        forgotten.add(n.text());
+                    } else if (locate(n.text()) == null) {
                         throw reject(n.at(), null, "forget", "forget names " + n.text() + ", which is not an earlier step");
                     }
                 }
@@ -366,11 +377,35 @@ public final class Checker {
         }
 
         /** Where a step of this label was written, or null when there is none yet. */
-        private Location written(String label) {
+        private Location written(String label) throws Stop {
             Live l = live.get(label);
             if (l != null) return new Location(certificateFile, l.line(), l.column());
-            int[] p = forgotten.positions(label);
-            return p == null ? null : new Location(certificateFile, p[0], p[1]);
+            Location[] p = locate(label);
+            return p == null ? null : p[0];
+        }
+
+        /**
+         * For a forgotten label: where its step was written and where it was first forgotten, found by reading the
+         * file again up to the statement being checked; null when the label was never forgotten. The fingerprint
+         * table only says when this reading is needed.
+         */
+        private Location[] locate(String label) throws Stop {
+            if (!forgotten.mayContain(label)) return null;
+            Location step = null;
+            try (CertificateSource again = CertificateSource.open(certificateFile, certificatePath, options.maxDepth(),
+                    options.maxTermSize(), false)) {
+                for (CertificateStatement s = again.next(); s != null; s = again.next()) {
+                    if (s.at().equals(current)) break;
+                    if (s instanceof Step st && step == null && st.label().text().equals(label)) step = st.label().at();
+                    if (s instanceof Forget f && step != null) {
+                        for (Name n : f.labels()) if (n.text().equals(label)) return new Location[] {step, n.at()};
+                    }
+                }
+            } catch (IOException | InputError | InterruptedException e) {
+                throw inputError(certificateFile, "cannot read the certificate file again to locate " + label + ": "
+                        + (e instanceof IOException io ? describe(io) : e.getMessage()));
+            }
+            return null;
         }
 
         void step(Step s) throws Stop {
@@ -415,6 +450,7 @@ public final class Checker {
                 if (fact.isEmptyClause()) {
                     refutation = label;
                     cone = graph.cone();
+                    graph.close();
                 }
             }
             if (premiseNames != null) {
@@ -553,10 +589,9 @@ public final class Checker {
                 if (premises != null) premises.add(name);
                 return l.fact();
             }
-            int[] gone = forgotten.positions(name);
+            Location[] gone = locate(name);
             if (gone != null) {
-                throw reject(n.at(), label, rule, name + " was forgotten at "
-                        + new Location(certificateFile, gone[2], gone[3]) + " and cannot be used again");
+                throw reject(n.at(), label, rule, name + " was forgotten at " + gone[1] + " and cannot be used again");
             }
             Fact ax = kernel.axiom(name);
             if (ax != null) {
