@@ -43,11 +43,27 @@ abstract class CertificateSource implements AutoCloseable {
     static final class Direct extends CertificateSource {
         private final MessageDigest md = newDigest();
         private final InputStream in;
+        /** Bytes read from the file so far (ahead of the parser by at most a buffer). */
+        private long consumed;
         private final CertificateReader reader;
         private String sha;
 
         Direct(String file, Path path, int maxDepth, long maxTermSize) throws IOException {
-            this.in = new DigestInputStream(Files.newInputStream(path), md);
+            this.in = new DigestInputStream(new java.io.FilterInputStream(Files.newInputStream(path)) {
+                @Override
+                public int read() throws IOException {
+                    int b = super.read();
+                    if (b >= 0) consumed++;
+                    return b;
+                }
+
+                @Override
+                public int read(byte[] b, int off, int len) throws IOException {
+                    int n = super.read(b, off, len);
+                    if (n > 0) consumed += n;
+                    return n;
+                }
+            }, md);
             this.reader = new CertificateReader(file, in, maxDepth, maxTermSize);
         }
 
@@ -90,11 +106,14 @@ abstract class CertificateSource implements AutoCloseable {
 
     /**
      * Parses on a thread of its own, handing statements over in batches through a bounded queue, so memory holds at
-     * most {@link #QUEUED} batches ahead of the checker.
+     * most {@link #QUEUED} batches ahead of the checker. A batch ends at {@link #BATCH} statements or after about
+     * {@link #BATCH_BYTES} of the file, so that long statements (deep terms, wide clauses) are not held by the
+     * thousand: the text read ahead stays within about QUEUED × BATCH_BYTES.
      */
     static final class Ahead extends CertificateSource {
         static final int BATCH = 256;
         static final int QUEUED = 8;
+        static final long BATCH_BYTES = 64 * 1024;
 
         /** The end of the statements: null when all were read, else the error that ended them. */
         private record End(Throwable error, String sha) {
@@ -124,16 +143,18 @@ abstract class CertificateSource implements AutoCloseable {
         private void produceAll(Direct direct) {
             Object[] out = new Object[BATCH];
             int n = 0;
+            long mark = 0;
             Throwable error = null;
             try {
                 while (!closed) {
                     CertificateStatement s = direct.next();
                     if (s == null) break;
                     out[n++] = s;
-                    if (n == BATCH) {
-                        queue.put(out);
+                    if (n == BATCH || direct.consumed - mark >= BATCH_BYTES) {
+                        queue.put(n == BATCH ? out : java.util.Arrays.copyOf(out, n));
                         out = new Object[BATCH];
                         n = 0;
+                        mark = direct.consumed;
                     }
                 }
             } catch (InterruptedException e) {

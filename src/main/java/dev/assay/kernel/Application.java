@@ -80,8 +80,13 @@ public final class Application implements Term {
     }
 
     static int shapeHash(Symbol s, Term[] args) {
+        // Mixed per argument (multiply, xor-shift): with h = 31 * h + a, a term f(t, t) would multiply t's hash by 32,
+        // and a tower of such terms would shift its hashes to zero and share a few buckets.
         int h = s.hashCode();
-        for (Term a : args) h = 31 * h + a.hashCode();
+        for (Term a : args) {
+            h = (h ^ a.hashCode()) * 0x9e3779b1;
+            h ^= h >>> 16;
+        }
         return h;
     }
 }

@@ -126,8 +126,27 @@ final class ReaderCharStream implements CharStream {
     String textOf(int from, int to) {
         int at = from - start;
         int length = Math.min(to, start + count - 1) - from + 1;
-        return length <= 0 ? "" : new String(data, at, length);
+        if (length <= 0) return "";
+        if (length > SHORT) return new String(data, at, length);
+        // Short names recur on every line (variables, constants, labels' stems): reuse the last string of the same
+        // characters instead of making a new one for each token.
+        int h = length;
+        for (int i = 0; i < length; i++) h = h * 31 + data[at + i];
+        int slot = (h ^ (h >>> 7)) & (recent.length - 1);
+        String r = recent[slot];
+        if (r != null && r.length() == length) {
+            boolean same = true;
+            for (int i = 0; same && i < length; i++) same = r.charAt(i) == data[at + i];
+            if (same) return r;
+        }
+        r = new String(data, at, length);
+        recent[slot] = r;
+        return r;
     }
+
+    /** Texts up to this many characters are looked up in {@link #recent}. */
+    private static final int SHORT = 8;
+    private final String[] recent = new String[512];
 
     void close() throws IOException {
         reader.close();
