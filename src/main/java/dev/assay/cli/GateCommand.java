@@ -47,6 +47,10 @@ final class GateCommand implements Callable<Integer> {
     @Option(names = "--timeout", paramLabel = "SECONDS", description = "time limit per case (default: none)")
     double timeout;
 
+    @Option(names = "--total-timeout", paramLabel = "SECONDS",
+            description = "time limit for the whole run; cases still running or not started end as timeout (default: none)")
+    double totalTimeout;
+
     @Option(names = "--shard", paramLabel = "K/N", description = "check only shard K of N (every N-th case, from the K-th)")
     String shard;
 
@@ -97,7 +101,7 @@ final class GateCommand implements Callable<Integer> {
         Checker.Options options = limits.options(err);
         if (options == null) return 2;
         Progress progress = new Progress(err, pairs.size(), "cases");
-        List<GateCase> cases = new Gate(jobs, (long) (timeout * 1000), options)
+        List<GateCase> cases = new Gate(jobs, (long) (timeout * 1000), (long) (totalTimeout * 1000), options)
                 .run(pairs, progress::update);
         progress.finish();
         out.print(GateReport.table(cases, true));

@@ -2,6 +2,7 @@ package dev.assay.gate;
 
 import dev.assay.check.CheckResult;
 import dev.assay.check.Checker;
+import dev.assay.check.Verdict;
 import dev.assay.check.Failure;
 
 import java.io.IOException;
@@ -35,9 +36,21 @@ public final class Gate {
     private final long timeoutMillis;
     private final Checker.Options options;
 
+    private final long totalMillis;
+    private long deadline;
+
     public Gate(int jobs, long timeoutMillis, Checker.Options options) {
+        this(jobs, timeoutMillis, 0, options);
+    }
+
+    /**
+     * {@code timeoutMillis} limits each case, {@code totalMillis} the whole run (0: no limit): past the total limit the
+     * running cases stop at their next step and the cases not yet started end at once, all with verdict timeout.
+     */
+    public Gate(int jobs, long timeoutMillis, long totalMillis, Checker.Options options) {
         this.jobs = Math.max(1, jobs);
         this.timeoutMillis = timeoutMillis;
+        this.totalMillis = totalMillis;
         this.options = options;
     }
 
@@ -67,6 +80,7 @@ public final class Gate {
 
     /** Checks every pair; {@code progress} is told the number done after each. */
     public List<GateCase> run(List<Pair> pairs, IntConsumer progress) {
+        deadline = totalMillis > 0 ? System.nanoTime() + totalMillis * 1_000_000 : Long.MAX_VALUE;
         AtomicInteger serial = new AtomicInteger();
         ThreadFactory big = r -> {
             Thread t = new Thread(null, r, "assay-gate-" + serial.incrementAndGet(), 1L << 29);
@@ -97,8 +111,17 @@ public final class Gate {
     /** One check; past the time limit the watchdog interrupts it and the checker stops before its next step. */
     private CheckResult checkWithin(Pair p, ScheduledExecutorService watchdog) {
         Thread self = Thread.currentThread();
-        ScheduledFuture<?> alarm = timeoutMillis > 0
-                ? watchdog.schedule(self::interrupt, timeoutMillis, TimeUnit.MILLISECONDS) : null;
+        long limit = timeoutMillis > 0 ? timeoutMillis : Long.MAX_VALUE;
+        if (deadline != Long.MAX_VALUE) limit = Math.min(limit, Math.max(0, (deadline - System.nanoTime()) / 1_000_000));
+        if (limit == 0) {
+            String cert = p.certificate().toString();
+            return new CheckResult(Verdict.TIMEOUT, p.problem().toString(), null, cert, null, null, "absent", 0,
+                    java.util.Map.of(), null, 0, List.of(), List.of(), false, List.of(),
+                    new Failure(cert, 1, 1, null, null, "not checked: the gate's total time limit was reached before"
+                            + " this case started", null, null, null), 0);
+        }
+        ScheduledFuture<?> alarm = null;
+        if (limit != Long.MAX_VALUE) alarm = watchdog.schedule(self::interrupt, limit, TimeUnit.MILLISECONDS);
         try {
             return new Checker(options).check(p.problem(), p.certificate());
         } finally {

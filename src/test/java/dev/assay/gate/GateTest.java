@@ -115,5 +115,12 @@ class GateTest {
         assertEquals("timeout", cases.get(0).verdict());
         List<GateCase> unlimited = new Gate(1, 0, Checker.Options.defaults()).run(Gate.find(dir), n -> { });
         assertEquals("rejected", unlimited.get(0).verdict(), "no false step, but every step checked");
+        // A total limit for the whole run: the running case stops, the cases not started end without a check.
+        Files.writeString(dir.resolve("later.problem"), problem);
+        Files.writeString(dir.resolve("later.proof"), proof);
+        List<GateCase> total = new Gate(1, 0, 1, Checker.Options.defaults()).run(Gate.find(dir), n -> { });
+        assertEquals(2, total.size());
+        for (GateCase c : total) assertEquals("timeout", c.verdict(), c.name());
+        assertTrue(total.get(1).failure().reason().contains("total time limit"), total.get(1).failure().reason());
     }
 }
