@@ -12,7 +12,7 @@ import java.util.concurrent.atomic.AtomicInteger;
 /** The {@code assay} command line. Commands are thin: they call the checker and a report. */
 @Command(name = "assay", mixinStandardHelpOptions = true, versionProvider = Main.Version.class,
         description = "Checks refutation certificates of first-order provers against their problems.",
-        subcommands = {CheckCommand.class, GateCommand.class, MergeCommand.class, UnifyCommand.class, ShowCommand.class, ProveCommand.class, CommandLine.HelpCommand.class},
+        subcommands = {CheckCommand.class, GateCommand.class, MergeCommand.class, UnifyCommand.class, ShowCommand.class, ProveCommand.class, BenchCommand.class, CommandLine.HelpCommand.class},
         footer = {"", "Exit status of check: 0 theorem or unsatisfiable, 3 vacuous, 1 rejected, 2 input error,",
                 "4 time limit, 70 internal error. Each command's help gives its own."})
 public final class Main implements Runnable {
