@@ -1,63 +1,65 @@
 package dev.assay.check;
 
+import dev.assay.fuzz.FuzzScale;
+import dev.assay.fuzz.Harness;
 import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;
+import net.jqwik.api.ShrinkingMode;
 import net.jqwik.api.constraints.Size;
+import net.jqwik.api.lifecycle.AddLifecycleHook;
+import net.jqwik.api.lifecycle.AfterContainer;
 
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.time.Duration;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Random;
-import java.util.concurrent.ExecutorService;
-import java.util.concurrent.Executors;
-import java.util.concurrent.Future;
-import java.util.concurrent.TimeUnit;
 
-import static org.junit.jupiter.api.Assertions.assertNotNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 /**
  * Random bytes and token-level mutants of the bundled certificates never crash the checker, never hang, and every
  * refusal is located. (Whether an accepted mutant is sound is the kernel tests' business; here only robustness.)
+ * The grammar-aware generators are in {@link GrammarFuzzTest}; both scale with {@code -Dassay.fuzz=long}.
  */
+@AddLifecycleHook(FuzzScale.class)
 class FuzzTest {
 
     private static final Path PROBLEM = Path.of("certificates", "depot", "key_cabinet.problem");
-    private static final Duration LIMIT = Duration.ofSeconds(20);
+    private static final Path DIR = tempDir();
 
-    /** Runs one check on a thread with a large stack, as the command line does, within a time limit. */
-    static CheckResult checkWithin(Path problem, Path proof) throws Exception {
-        ExecutorService pool = Executors.newSingleThreadExecutor(r -> new Thread(null, r, "fuzz", 1L << 28));
+    private static Path tempDir() {
         try {
-            Future<CheckResult> f = pool.submit(() -> new Checker().check(problem, proof));
-            return f.get(LIMIT.toSeconds(), TimeUnit.SECONDS);
-        } finally {
-            pool.shutdownNow();
+            Path d = Files.createTempDirectory("assay-fuzz");
+            d.toFile().deleteOnExit();
+            return d;
+        } catch (java.io.IOException e) {
+            throw new IllegalStateException(e);
         }
+    }
+
+    /** Runs one check on a thread with the command line's stack, within a time limit ({@link Harness#LIMIT}). */
+    static CheckResult checkWithin(Path problem, Path proof) throws Exception {
+        return Harness.check(problem, proof, proof.toString());
     }
 
     static void located(CheckResult r) {
-        assertNotNull(r.verdict());
-        if (r.failure() != null) {
-            assertTrue(r.failure().line() >= 1 && r.failure().column() >= 1, r.failure().render());
-            assertTrue(!r.failure().reason().isBlank());
-        }
+        Harness.located(r, "fuzz input");
     }
 
-    @Property(tries = 150, seed = "42")
+    @Property(tries = 50, seed = "42")
     void randomBytesAreRefusedWithALocatedMessage(@ForAll @Size(max = 400) byte[] bytes) throws Exception {
-        Path dir = Files.createTempDirectory("fuzz");
-        Path proof = dir.resolve("random.proof");
+        Path proof = DIR.resolve("random.proof");
         Files.write(proof, bytes);
         CheckResult r = checkWithin(PROBLEM, proof);
         located(r);
         assertTrue(r.verdict() == Verdict.INPUT_ERROR || r.verdict() == Verdict.REJECTED, r.verdict().word());
+        Harness.count("random bytes", r.verdict().word());
+        Harness.slowest("random bytes", r.elapsedMillis());
     }
 
-    @Property(tries = 600, seed = "7")
+    @Property(tries = 100, seed = "7", shrinking = ShrinkingMode.OFF)
     void tokenMutantsOfValidCertificatesNeverCrash(@ForAll("seeds") long seed) throws Exception {
         List<Path> proofs = CertificatesTest.validProofs();
         Random random = new Random(seed);
@@ -79,10 +81,12 @@ class FuzzTest {
                 }
             }
         }
-        Path dir = Files.createTempDirectory("fuzz");
-        Path mutant = dir.resolve("mutant.proof");
+        Path mutant = DIR.resolve("mutant.proof");
         Files.writeString(mutant, String.join("", tokens), StandardCharsets.UTF_8);
-        located(checkWithin(CertificatesTest.problemOf(proof), mutant));
+        CheckResult r = checkWithin(CertificatesTest.problemOf(proof), mutant);
+        located(r);
+        Harness.count("token mutants", r.verdict().word());
+        Harness.slowest("token mutants", r.elapsedMillis());
     }
 
     @net.jqwik.api.Provide
@@ -108,4 +112,10 @@ class FuzzTest {
         return out;
     }
 
+    @AfterContainer
+    static void summary() throws Exception {
+        System.out.println("fuzz (" + (FuzzScale.isLong() ? "long run, tries x" + FuzzScale.factor() : "default run")
+                + "):\n" + Harness.summary());
+        Harness.writeSummary("FuzzTest " + (FuzzScale.isLong() ? "long x" + FuzzScale.factor() : "default"));
+    }
 }
