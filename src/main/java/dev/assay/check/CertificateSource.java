@@ -111,9 +111,9 @@ abstract class CertificateSource implements AutoCloseable {
      * thousand: the text read ahead stays within about QUEUED × BATCH_BYTES.
      */
     static final class Ahead extends CertificateSource {
-        static final int BATCH = 256;
-        static final int QUEUED = 8;
-        static final long BATCH_BYTES = 64 * 1024;
+        static final int BATCH = 64;
+        static final int QUEUED = 3;
+        static final long BATCH_BYTES = 16 * 1024;
 
         /** The end of the statements: null when all were read, else the error that ended them. */
         private record End(Throwable error, String sha) {

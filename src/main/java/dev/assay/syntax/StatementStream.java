@@ -9,6 +9,7 @@ import org.antlr.v4.runtime.BailErrorStrategy;
 import org.antlr.v4.runtime.Parser;
 import org.antlr.v4.runtime.ParserRuleContext;
 import org.antlr.v4.runtime.Token;
+import org.antlr.v4.runtime.TokenSource;
 import org.antlr.v4.runtime.TokenStream;
 import org.antlr.v4.runtime.UnbufferedTokenStream;
 import org.antlr.v4.runtime.atn.PredictionMode;
@@ -59,11 +60,17 @@ final class StatementStream<P extends Parser, S> {
         S build(RawBuilder builder, ParserRuleContext statement) throws InputError;
     }
 
+    /**
+     * Whether to lex with ANTLR's generated lexer instead of {@link FastLexer} (they yield the same tokens; the
+     * generated one is the definition). Set with {@code -Dassay.lexer=generated}, to compare the two.
+     */
+    static final boolean GENERATED_LEXER = "generated".equals(System.getProperty("assay.lexer"));
+
     private final String file;
     private final int maxDepth;
     private final Language<P, S> language;
     private final ReaderCharStream chars;
-    private final AssayLexer lexer;
+    private final TokenSource lexer;
     /** Made by the first {@link #next}, since making one reads the first token. */
     private UnbufferedTokenStream<Token> tokens;
     private P parser;
@@ -86,10 +93,15 @@ final class StatementStream<P extends Parser, S> {
         this.maxDepth = maxDepth;
         this.language = language;
         this.chars = new ReaderCharStream(file, input);
-        this.lexer = new AssayLexer(chars);
-        lexer.removeErrorListeners();
         // The window of the char stream holds only the current token's characters: tokens copy theirs.
-        lexer.setTokenFactory(new TokenTexts(chars));
+        if (GENERATED_LEXER) {
+            AssayLexer generated = new AssayLexer(chars);
+            generated.removeErrorListeners();
+            generated.setTokenFactory(new TokenTexts(chars));
+            this.lexer = generated;
+        } else {
+            this.lexer = new FastLexer(chars, new TokenTexts(chars));
+        }
         this.rules = GrammarRule.tableFor(language.ruleNames());
         this.depth = new DepthLimit(file, maxDepth, maxTermSize, rules);
         this.builder = new RawBuilder(file, rules, maxDepth);
