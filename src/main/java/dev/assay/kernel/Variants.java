@@ -47,6 +47,9 @@ final class Variants {
     }
 
     /** True when {@code a} and {@code b} are variants of each other; false also when the budget ran out. */
+    /** Clauses of at most this many distinct literals skip the grouping by skeleton. */
+    private static final int SMALL = 4;
+
     static boolean areVariants(Clause a, Clause b, long budget) {
         // Equal as written, literal by literal: the identity renaming does it (the common case for ground clauses).
         if (a.width() == b.width()) {
@@ -63,6 +66,13 @@ final class Variants {
         List<List<Literal>> inOrder = new ArrayList<>(lb.size());
         for (Literal l : lb) inOrder.add(List.of(l));
         if (new Search(la, inOrder, budget).run()) return true;
+        if (la.size() <= SMALL) {
+            // A few literals: every literal of b is a candidate for each of a, the same search without the grouping,
+            // which costs more than it saves at this size.
+            List<List<Literal>> all = new ArrayList<>(la.size());
+            for (int i = 0; i < la.size(); i++) all.add(lb);
+            return new Search(la, all, budget).run();
+        }
         Skeletons sk = new Skeletons();
         Map<Variable, Integer> occA = occurrences(la);
         Map<Variable, Integer> occB = occurrences(lb);

@@ -130,14 +130,20 @@ public final class Resolver {
     private final class Scope {
         final Signature signature;
         final Set<String> fresh;
-        final Map<String, Use> freshUses = new LinkedHashMap<>();
+        final Map<String, Use> freshUses;
 
         Scope(Signature signature, Set<String> fresh) {
             this.signature = signature;
             this.fresh = fresh;
+            this.freshUses = fresh.isEmpty() ? Map.of() : new LinkedHashMap<>();
         }
 
         Symbol symbol(String name, Symbol.Kind kind, int arity, Location at) throws InputError, StepProblem {
+            if (signature != null && fresh.isEmpty()) {
+                // The common case, a symbol of the signature as it stands, without making a Symbol to compare.
+                Symbol known = signature.lookup(name);
+                if (known != null && known.kind() == kind && known.arity() == arity) return known;
+            }
             Symbol wanted = new Symbol(name, kind, arity);
             if (signature == null) return note(wanted, at);
             if (fresh.contains(name)) {
