@@ -33,12 +33,8 @@ final class ChainFamily implements Family {
         return round % 8 == 3 ? 5 : 2;
     }
 
-    /** The number of rounds that fit in {@code steps}; the rest is padding. */
     private static long rounds(long steps) {
-        long used = PRELUDE + CLOSING;
-        long r = 0;
-        while (used + cost(r) <= steps) used += cost(r++);
-        return r;
+        return Family.rounds(steps, PRELUDE + CLOSING, r -> cost(r));
     }
 
     private static String gate(long i) {

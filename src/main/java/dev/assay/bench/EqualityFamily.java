@@ -36,10 +36,7 @@ final class EqualityFamily implements Family {
     }
 
     private static long rounds(long steps) {
-        long used = PRELUDE + CLOSING;
-        long r = 0;
-        while (used + cost(r) <= steps) used += cost(r++);
-        return r;
+        return Family.rounds(steps, PRELUDE + CLOSING, r -> cost(r));
     }
 
     private static String desk(long i) {

@@ -9,6 +9,14 @@ import java.io.IOException;
  */
 public interface Family {
 
+    /** How many rounds of the given costs fit in {@code steps} after {@code fixed} steps; the rest is padding. */
+    static long rounds(long steps, long fixed, java.util.function.LongToIntFunction cost) {
+        long used = fixed;
+        long r = 0;
+        while (used + cost.applyAsInt(r) <= steps) used += cost.applyAsInt(r++);
+        return r;
+    }
+
     String name();
 
     /** One line for {@code assay bench generate --help} and the performance notes. */
