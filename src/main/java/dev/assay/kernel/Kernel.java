@@ -545,11 +545,6 @@ public final class Kernel {
         return new Outcome.Rejected(rule, reason, Printer.formula(stated), Printer.formula(derived));
     }
 
-    private static Outcome notSupported(String rule, Object stated) {
-        String s = stated instanceof Clause c ? Printer.clause(c) : Printer.formula((Formula) stated);
-        return new Outcome.Rejected(rule, "the rule " + rule + " is not supported yet by this checker", s, null);
-    }
-
     private static Outcome foreign(String rule, Fact f) {
         return new Outcome.Rejected(rule, "premise " + f.label() + " belongs to another check", null, null);
     }

@@ -104,19 +104,4 @@ final class Terms {
         }
         for (Term arg : ((Application) t).argumentArray()) collectSmall(arg, into);
     }
-
-    /** Whether {@code v} occurs in {@code t}. */
-    static boolean occurs(Variable v, Term t) {
-        if (t.isGround()) return false;
-        Set<Term> seen = Collections.newSetFromMap(new IdentityHashMap<>());
-        ArrayDeque<Term> stack = new ArrayDeque<>();
-        stack.push(t);
-        while (!stack.isEmpty()) {
-            Term s = stack.pop();
-            if (s == v) return true;
-            if (s.isGround() || !seen.add(s)) continue;
-            if (s instanceof Application a) for (Term arg : a.argumentArray()) stack.push(arg);
-        }
-        return false;
-    }
 }

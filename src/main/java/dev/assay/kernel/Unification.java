@@ -51,7 +51,7 @@ public final class Unification {
                 int depth = n - 1 - i;
                 if (n > 40 && depth == 20) {
                     sb.append("….(").append(n - 30).append(" more levels)….");
-                    i = 10;
+                    i = 9;
                 }
                 sb.append(steps.get(i));
                 if (i > 0) sb.append('.');
