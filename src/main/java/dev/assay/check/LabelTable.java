@@ -1,7 +1,7 @@
 package dev.assay.check;
 
 /**
- * The labels of forgotten steps as 64-bit fingerprints (16 bytes per label at most), so that a certificate of tens of
+ * The labels of forgotten steps as 64-bit fingerprints (11 to 21 bytes per label), so that a certificate of tens of
  * millions of steps that forgets as it goes does not keep a string per step. A fingerprint can only say "perhaps
  * present"; the checker confirms every such answer against the file itself before acting on it, so two labels that
  * share a fingerprint never cause a wrong message or a wrong verdict, only a second reading of the file.
@@ -20,7 +20,7 @@ final class LabelTable {
     boolean add(String label) {
         long f = fingerprint(label);
         if (find(f) >= 0) return false;
-        if ((count + 1) * 2 > slots.length) rehash();
+        if ((count + 1) * 4L > slots.length * 3L) rehash(); // at most three quarters full
         insert(f);
         count++;
         return true;
