@@ -669,7 +669,8 @@ public final class Checker {
         return e.getClass().getSimpleName() + (e.getMessage() == null ? "" : ": " + e.getMessage());
     }
 
-    static String sha256(byte[] bytes) {
+    /** The SHA-256 of {@code bytes} in lower-case hex, as reports and {@code digest} lines write it. */
+    public static String sha256(byte[] bytes) {
         return CertificateSource.hex(CertificateSource.newDigest().digest(bytes));
     }
 
