@@ -175,10 +175,10 @@ public final class Checker {
         try {
             for (Path p : List.of(problemPath, certificatePath)) {
                 long size = Files.size(p);
-                if (size > options.maxInputBytes()) {
+                String tooLarge = tooLarge(p == problemPath ? "problem" : "certificate", size);
+                if (tooLarge != null) {
                     return new Parsed(statements, bytes, System.nanoTime() - start, new Failure(p.toString(), 1, 1, null,
-                            null, "the file has " + size + " bytes, more than the input size limit of "
-                            + options.maxInputBytes() + " (raise it with --max-input-size)", null, null, null));
+                            null, tooLarge, null, null, null));
                 }
                 bytes += size;
             }
@@ -201,6 +201,13 @@ public final class Checker {
                     null, null, null));
         }
         return new Parsed(statements, bytes, System.nanoTime() - start, null);
+    }
+
+    /** Why a file of {@code size} bytes is over the input size limit, or null when it is not. */
+    private String tooLarge(String what, long size) {
+        if (size <= options.maxInputBytes()) return null;
+        return "the " + what + " file has " + size + " bytes, more than the input size limit of "
+                + options.maxInputBytes() + " (raise it with --max-input-size)";
     }
 
     public CheckResult check(Path problemPath, Path certificatePath) {
@@ -340,11 +347,8 @@ public final class Checker {
         }
 
         private void sizeLimit(String file, Path path, String what) throws IOException, Stop {
-            long size = Files.size(path);
-            if (size > options.maxInputBytes()) {
-                throw inputError(file, "the " + what + " file has " + size + " bytes, more than the input size limit of "
-                        + options.maxInputBytes() + " (raise it with --max-input-size)");
-            }
+            String why = tooLarge(what, Files.size(path));
+            if (why != null) throw inputError(file, why);
         }
 
         void statement(CertificateStatement s) throws Stop {
@@ -454,9 +458,7 @@ public final class Checker {
                 }
             }
             if (premiseNames != null) {
-                List<String> named = new ArrayList<>(premiseNames.size());
-                for (String p : premiseNames) named.add(p.startsWith("axiom:") ? p.substring(6) : p);
-                listener.step(s, fact.isClause() ? fact.clause() : fact.formula(), named);
+                listener.step(s, fact.isClause() ? fact.clause() : fact.formula(), List.copyOf(premiseNames));
             }
         }
 
@@ -596,7 +598,7 @@ public final class Checker {
             Fact ax = kernel.axiom(name);
             if (ax != null) {
                 premiseId(ProofGraph.axiom(axiomIndex.get(name)));
-                if (premises != null) premises.add("axiom:" + name);
+                if (premises != null) premises.add(name);
                 return ax;
             }
             if (name.equals(problem.goalName())) {

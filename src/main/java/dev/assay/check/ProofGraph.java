@@ -3,7 +3,6 @@ package dev.assay.check;
 import java.io.IOException;
 import java.io.UncheckedIOException;
 import java.nio.ByteBuffer;
-import java.nio.IntBuffer;
 import java.nio.channels.FileChannel;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -79,11 +78,10 @@ final class ProofGraph implements AutoCloseable {
                 spillFile.toFile().deleteOnExit();
                 spill = FileChannel.open(spillFile, StandardOpenOption.READ, StandardOpenOption.WRITE);
             }
-            ByteBuffer buf = ByteBuffer.allocate(CHUNK * 4);
+            ByteBuffer buf = io();
             for (int[] c : chunks) {
                 buf.clear();
                 buf.asIntBuffer().put(c);
-                buf.limit(CHUNK * 4);
                 long at = spilledChunks * CHUNK * 4L;
                 while (buf.hasRemaining()) at += spill.write(buf, at);
                 spilledChunks++;
@@ -94,9 +92,18 @@ final class ProofGraph implements AutoCloseable {
         }
     }
 
+    /** The one buffer of a chunk's bytes for writing and reading the spill file. */
+    private ByteBuffer io;
+
+    private ByteBuffer io() {
+        if (io == null) io = ByteBuffer.allocate(CHUNK * 4);
+        return io;
+    }
+
     /** Reads the log backwards a chunk at a time. */
     private final class Reader {
         private long loaded = -1;
+        /** Made on the first read from the spill file, then reused. */
         private int[] chunk;
 
         int get(long i) {
@@ -104,16 +111,16 @@ final class ProofGraph implements AutoCloseable {
             if (c >= spilledChunks) return chunks.get((int) (c - spilledChunks))[(int) (i % CHUNK)];
             if (c != loaded) {
                 try {
-                    ByteBuffer buf = ByteBuffer.allocate(CHUNK * 4);
+                    if (chunk == null) chunk = new int[CHUNK];
+                    ByteBuffer buf = io();
+                    buf.clear();
                     long at = c * CHUNK * 4L;
                     while (buf.hasRemaining()) {
                         int n = spill.read(buf, at + buf.position());
                         if (n < 0) throw new IOException("the proof graph file ended early");
                     }
                     buf.flip();
-                    IntBuffer ints = buf.asIntBuffer();
-                    if (chunk == null) chunk = new int[CHUNK];
-                    ints.get(chunk);
+                    buf.asIntBuffer().get(chunk);
                     loaded = c;
                 } catch (IOException e) {
                     throw new UncheckedIOException("cannot read the proof graph back from its temporary file", e);

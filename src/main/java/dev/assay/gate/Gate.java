@@ -37,7 +37,6 @@ public final class Gate {
     private final Checker.Options options;
 
     private final long totalMillis;
-    private long deadline;
 
     public Gate(int jobs, long timeoutMillis, Checker.Options options) {
         this(jobs, timeoutMillis, 0, options);
@@ -80,7 +79,7 @@ public final class Gate {
 
     /** Checks every pair; {@code progress} is told the number done after each. */
     public List<GateCase> run(List<Pair> pairs, IntConsumer progress) {
-        deadline = totalMillis > 0 ? System.nanoTime() + totalMillis * 1_000_000 : Long.MAX_VALUE;
+        long deadline = totalMillis > 0 ? System.nanoTime() + totalMillis * 1_000_000 : Long.MAX_VALUE;
         AtomicInteger serial = new AtomicInteger();
         ThreadFactory big = r -> {
             Thread t = new Thread(null, r, "assay-gate-" + serial.incrementAndGet(), 1L << 29);
@@ -95,7 +94,7 @@ public final class Gate {
         });
         try {
             List<Future<CheckResult>> futures = new ArrayList<>();
-            for (Pair p : pairs) futures.add(pool.submit(() -> checkWithin(p, watchdog)));
+            for (Pair p : pairs) futures.add(pool.submit(() -> checkWithin(p, watchdog, deadline)));
             List<GateCase> out = new ArrayList<>();
             for (int i = 0; i < pairs.size(); i++) {
                 out.add(await(pairs.get(i), futures.get(i)));
@@ -109,7 +108,7 @@ public final class Gate {
     }
 
     /** One check; past the time limit the watchdog interrupts it and the checker stops before its next step. */
-    private CheckResult checkWithin(Pair p, ScheduledExecutorService watchdog) {
+    private CheckResult checkWithin(Pair p, ScheduledExecutorService watchdog, long deadline) {
         Thread self = Thread.currentThread();
         long limit = timeoutMillis > 0 ? timeoutMillis : Long.MAX_VALUE;
         if (deadline != Long.MAX_VALUE) limit = Math.min(limit, Math.max(0, (deadline - System.nanoTime()) / 1_000_000));
