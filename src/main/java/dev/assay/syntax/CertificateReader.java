@@ -60,6 +60,11 @@ public final class CertificateReader implements Closeable {
         this.stream = new StatementStream<>(file, Utf8.of(input), maxDepth, maxTermSize, LANGUAGE);
     }
 
+    /** With {@code direct} false, every statement is read by the generated parser alone: for tests that compare the two. */
+    CertificateReader(String file, Reader input, int maxDepth, long maxTermSize, boolean direct) {
+        this.stream = new StatementStream<>(file, input, maxDepth, maxTermSize, LANGUAGE, direct);
+    }
+
     /** Opens a file, read as UTF-8; bytes that are not UTF-8 are an {@link InputError} when reached. */
     public static CertificateReader open(Path file) throws IOException {
         return open(file, DEFAULT_MAX_DEPTH);
@@ -101,6 +106,11 @@ public final class CertificateReader implements Closeable {
         }
         previous = statement;
         return statement;
+    }
+
+    /** How many statements the direct parser handed over that the generated parser then read (see DirectParserTest). */
+    int readAfterHandOver() {
+        return stream.readAfterHandOver;
     }
 
     @Override
@@ -182,6 +192,11 @@ public final class CertificateReader implements Closeable {
                 @Override
                 public CertificateStatement build(RawBuilder builder, ParserRuleContext statement) throws InputError {
                     return builder.certificateStatement((ParserRuleContext) statement.getChild(0));
+                }
+
+                @Override
+                public CertificateStatement direct(DirectParser parser) throws DirectParser.Bail {
+                    return parser.certificateStatement();
                 }
             };
 }

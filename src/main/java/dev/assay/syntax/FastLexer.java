@@ -88,9 +88,16 @@ final class FastLexer implements TokenSource {
     private String name;
 
     FastLexer(ReaderCharStream in, TokenFactory<?> factory) {
+        this(in, factory, 1, 0);
+    }
+
+    /** A lexer that starts where {@code in} stands, which is at {@code line} and {@code column} (from 0) of the file. */
+    FastLexer(ReaderCharStream in, TokenFactory<?> factory, int line, int column) {
         this.in = in;
         this.factory = factory;
         this.source = new Pair<>(this, in);
+        this.line = line;
+        this.column = column;
     }
 
     @Override

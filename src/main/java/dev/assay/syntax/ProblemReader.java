@@ -60,6 +60,11 @@ public final class ProblemReader implements Closeable {
         this.stream = new StatementStream<>(file, Utf8.of(input), maxDepth, maxTermSize, LANGUAGE);
     }
 
+    /** With {@code direct} false, every statement is read by the generated parser alone: for tests that compare the two. */
+    ProblemReader(String file, Reader input, int maxDepth, long maxTermSize, boolean direct) {
+        this.stream = new StatementStream<>(file, input, maxDepth, maxTermSize, LANGUAGE, direct);
+    }
+
     /** Opens a file, read as UTF-8; bytes that are not UTF-8 are an {@link InputError} when reached. */
     public static ProblemReader open(Path file) throws IOException {
         return open(file, DEFAULT_MAX_DEPTH);
@@ -97,6 +102,11 @@ public final class ProblemReader implements Closeable {
         }
         started = true;
         return statement;
+    }
+
+    /** How many statements the direct parser handed over that the generated parser then read (see DirectParserTest). */
+    int readAfterHandOver() {
+        return stream.readAfterHandOver;
     }
 
     @Override
@@ -178,6 +188,11 @@ public final class ProblemReader implements Closeable {
                 @Override
                 public ProblemStatement build(RawBuilder builder, ParserRuleContext statement) throws InputError {
                     return builder.problemStatement((ParserRuleContext) statement.getChild(0));
+                }
+
+                @Override
+                public ProblemStatement direct(DirectParser parser) throws DirectParser.Bail {
+                    return parser.problemStatement();
                 }
             };
 }

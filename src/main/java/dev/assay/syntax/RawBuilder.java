@@ -2,7 +2,6 @@ package dev.assay.syntax;
 
 import dev.assay.syntax.grammar.AssayLexer;
 import java.util.ArrayList;
-import java.util.Arrays;
 import java.util.List;
 import java.util.Locale;
 import org.antlr.v4.runtime.ParserRuleContext;
@@ -14,19 +13,19 @@ import org.antlr.v4.runtime.tree.TerminalNode;
  * Turns the parse tree of one statement into raw syntax. It goes by rule name (see
  * {@link GrammarRule}), so one builder serves both parsers.
  *
- * <p>Formulas are read with explicit stacks, not by recursion; terms recurse once per level,
+ * <p>Formulas are read with an explicit stack, not by recursion; terms recurse once per level,
  * as the parser did.
  */
 final class RawBuilder {
 
     private final String file;
     private final GrammarRule[] rules;
-    private final int maxDepth;
+    private final FormulaAssembler assembler;
 
     RawBuilder(String file, GrammarRule[] rules, int maxDepth) {
         this.file = file;
         this.rules = rules;
-        this.maxDepth = maxDepth;
+        this.assembler = new FormulaAssembler(maxDepth);
     }
 
     // ---- statements
@@ -75,8 +74,7 @@ final class RawBuilder {
         }
         String digits = content.substring(prefix.length());
         for (int i = 0; i < digits.length(); i++) {
-            char c = digits.charAt(i);
-            if (Character.digit(c, 16) < 0 || c > 'f') {
+            if (!isHexDigit(digits.charAt(i))) {
                 int column = string.getCharPositionInLine() + 2 + content.codePointCount(0, prefix.length() + i);
                 throw new InputError(new Location(file, string.getLine(), column),
                         "a digest has only hexadecimal digits, found " + SyntaxErrors.showCharacter(digits.codePointAt(i)));
@@ -86,6 +84,24 @@ final class RawBuilder {
             throw new InputError(at(string), "a SHA-256 digest has 64 hexadecimal digits, found " + digits.length());
         }
         return digits.toLowerCase(Locale.ROOT);
+    }
+
+    /** The digits of a digest string's content in lower case, or null when {@link #digest} would refuse it. */
+    static String digestDigits(String content) {
+        String prefix = "sha256:";
+        if (!content.startsWith(prefix) || content.length() != prefix.length() + 64) {
+            return null;
+        }
+        for (int i = prefix.length(); i < content.length(); i++) {
+            if (!isHexDigit(content.charAt(i))) {
+                return null;
+            }
+        }
+        return content.substring(prefix.length()).toLowerCase(Locale.ROOT);
+    }
+
+    private static boolean isHexDigit(char c) {
+        return Character.digit(c, 16) >= 0 && c <= 'f';
     }
 
     private Step step(ParserRuleContext ctx, Location at) throws InputError {
@@ -143,81 +159,44 @@ final class RawBuilder {
 
     // ---- formulas
 
-    // The kinds of operator of the formula reader below, by how tightly they bind. A quantifier
-    // binds loosest: no connective to its right ends its body, only a closing parenthesis or
-    // the end of the formula. `not` binds tightest. A parenthesis is a barrier.
-    private static final int OPEN_PARENTHESIS = 0;
-    private static final int OP_QUANTIFIER = 1;
-    private static final int OP_IFF = 2;
-    private static final int OP_IMPLIES = 3;
-    private static final int OP_OR = 4;
-    private static final int OP_AND = 5;
-    private static final int OP_NOT = 6;
-
-    /** An operator waiting for its right operand: a prefix, or a connective with its operands so far. */
-    private static final class Operator {
-        final int kind;
-        final Token token;
-        final ParserRuleContext quantifier;
-        int operands;
-
-        Operator(int kind, Token token, ParserRuleContext quantifier, int operands) {
-            this.kind = kind;
-            this.token = token;
-            this.quantifier = quantifier;
-            this.operands = operands;
-        }
-    }
-
     /**
-     * The formula of a parse tree. The parse tree has checked the syntax; this reads its tokens in
-     * order with an operator stack (Dijkstra's shunting yard), which applies the precedence of
-     * FORMAT.md §2, gives a quantifier everything to its right (see Logic.g4), flattens chains of
-     * one connective, nests {@code implies} to the right and rejects an {@code iff} chain. Nothing
-     * here recurses with the nesting of the formula, and the depth of what is built is limited
-     * like the parser's ({@link DepthLimit}): each connective, {@code not} and quantifier of the
-     * tree is a level, and so is each function application in an atom's arguments. (A chain of
-     * implications or of quantifiers is flat to the parser but nests in the tree.)
+     * The formula of a parse tree. The parse tree has checked the syntax; this hands its tokens,
+     * in order, to a {@link FormulaAssembler}, which applies precedence and builds the tree.
      */
     RawFormula formula(ParserRuleContext root) throws InputError {
         List<ParseTree> pending = new ArrayList<>();
-        List<Operator> operators = new ArrayList<>();
-        List<RawFormula> values = new ArrayList<>();
-        Depths depths = new Depths();
+        FormulaAssembler formula = assembler;
+        formula.start();
         pending.add(root);
         while (!pending.isEmpty()) {
             ParseTree node = pending.remove(pending.size() - 1);
             if (node instanceof TerminalNode terminal) {
                 Token token = terminal.getSymbol();
                 switch (token.getType()) {
-                    case AssayLexer.NOT -> operators.add(new Operator(OP_NOT, token, null, 0));
-                    case AssayLexer.AND -> connective(OP_AND, token, operators, values, depths);
-                    case AssayLexer.OR -> connective(OP_OR, token, operators, values, depths);
-                    case AssayLexer.IMPLIES -> connective(OP_IMPLIES, token, operators, values, depths);
-                    case AssayLexer.IFF -> connective(OP_IFF, token, operators, values, depths);
-                    case AssayLexer.LPAREN -> operators.add(new Operator(OPEN_PARENTHESIS, token, null, 0));
-                    case AssayLexer.RPAREN -> {
-                        while (operators.get(operators.size() - 1).kind != OPEN_PARENTHESIS) {
-                            reduce(operators, values, depths);
-                        }
-                        operators.remove(operators.size() - 1);
-                    }
-                    case AssayLexer.TRUE, AssayLexer.FALSE -> {
-                        values.add(new RawConstant(token.getType() == AssayLexer.TRUE, at(token)));
-                        depths.push(0);
-                    }
+                    case AssayLexer.NOT -> formula.not(at(token));
+                    case AssayLexer.AND -> formula.connective(FormulaAssembler.AND, at(token));
+                    case AssayLexer.OR -> formula.connective(FormulaAssembler.OR, at(token));
+                    case AssayLexer.IMPLIES -> formula.connective(FormulaAssembler.IMPLIES, at(token));
+                    case AssayLexer.IFF -> formula.connective(FormulaAssembler.IFF, at(token));
+                    case AssayLexer.LPAREN -> formula.openParenthesis();
+                    case AssayLexer.RPAREN -> formula.closeParenthesis();
+                    case AssayLexer.TRUE, AssayLexer.FALSE ->
+                            formula.operand(new RawConstant(token.getType() == AssayLexer.TRUE, at(token)), 0);
                     default -> throw new IllegalStateException("unexpected token in a formula: " + token.getText());
                 }
                 continue;
             }
             ParserRuleContext ctx = (ParserRuleContext) node;
             switch (kind(ctx)) {
-                case QUANTIFIER -> operators.add(new Operator(OP_QUANTIFIER, ctx.start, ctx, 0));
-                case ATOM -> {
-                    RawAtomic atomic = atom(ctx);
-                    values.add(new RawAtom(atomic, atomic.at()));
-                    depths.push(depthOf(atomic));
+                case QUANTIFIER -> {
+                    int n = ctx.getChildCount();
+                    List<Name> variables = new ArrayList<>(n - 2);
+                    for (int v = 1; v < n - 1; v++) {
+                        variables.add(name(ctx, v));
+                    }
+                    formula.quantifier(type(ctx, 0) == AssayLexer.FORALL, variables, at(ctx.start));
                 }
+                case ATOM -> formula.atom(atom(ctx));
                 case FORMULA, IMPLIES_FORMULA, OR_FORMULA, AND_FORMULA, UNARY_FORMULA, PRIMARY_FORMULA -> {
                     for (int i = ctx.getChildCount() - 1; i >= 0; i--) {
                         pending.add(ctx.getChild(i));
@@ -226,117 +205,7 @@ final class RawBuilder {
                 default -> throw unexpected(ctx);
             }
         }
-        while (!operators.isEmpty()) {
-            reduce(operators, values, depths);
-        }
-        if (values.size() != 1) {
-            throw new IllegalStateException("a formula left " + values.size() + " values");
-        }
-        return values.get(0);
-    }
-
-    private void connective(int kind, Token token, List<Operator> operators, List<RawFormula> values, Depths depths)
-            throws InputError {
-        // Everything that binds tighter is complete: `not`, and connectives of higher precedence.
-        // An equal one stays: `and`/`or` gain an operand, `implies` nests to the right.
-        while (!operators.isEmpty() && operators.get(operators.size() - 1).kind > kind) {
-            reduce(operators, values, depths);
-        }
-        Operator top = operators.isEmpty() ? null : operators.get(operators.size() - 1);
-        if (top != null && top.kind == kind && (kind == OP_AND || kind == OP_OR)) {
-            top.operands++;
-            return;
-        }
-        if (top != null && top.kind == OP_IFF && kind == OP_IFF) {
-            throw new InputError(at(token), SyntaxErrors.iffIsNotAssociative());
-        }
-        operators.add(new Operator(kind, token, null, 2));
-    }
-
-    private void reduce(List<Operator> operators, List<RawFormula> values, Depths depths) throws InputError {
-        Operator op = operators.remove(operators.size() - 1);
-        int last = values.size() - 1;
-        RawFormula result;
-        int depth;
-        switch (op.kind) {
-            case OP_NOT -> {
-                result = new RawNot(values.remove(last), at(op.token));
-                depth = depths.pop() + 1;
-            }
-            case OP_QUANTIFIER -> {
-                ParserRuleContext q = op.quantifier;
-                int n = q.getChildCount();
-                List<Name> variables = new ArrayList<>(n - 2);
-                for (int v = 1; v < n - 1; v++) {
-                    variables.add(name(q, v));
-                }
-                result = new RawQuantified(type(q, 0) == AssayLexer.FORALL, variables, values.remove(last), at(op.token));
-                depth = depths.pop() + 1;
-            }
-            case OP_AND, OP_OR -> {
-                List<RawFormula> operands = new ArrayList<>(values.subList(values.size() - op.operands, values.size()));
-                values.subList(values.size() - op.operands, values.size()).clear();
-                depth = 0;
-                for (int i = 0; i < op.operands; i++) {
-                    depth = Math.max(depth, depths.pop());
-                }
-                depth++;
-                result = op.kind == OP_AND
-                        ? new RawAnd(operands, operands.get(0).at())
-                        : new RawOr(operands, operands.get(0).at());
-            }
-            case OP_IMPLIES, OP_IFF -> {
-                RawFormula right = values.remove(last);
-                RawFormula left = values.remove(last - 1);
-                depth = Math.max(depths.pop(), depths.pop()) + 1;
-                result = op.kind == OP_IMPLIES ? new RawImplies(left, right, left.at()) : new RawIff(left, right, left.at());
-            }
-            default -> throw new IllegalStateException("unbalanced parentheses in a parse tree");
-        }
-        if (depth > maxDepth) {
-            throw new InputError(result.at(), "nesting depth exceeds the limit of " + maxDepth
-                    + " (raise it with --max-depth)");
-        }
-        values.add(result);
-        depths.push(depth);
-    }
-
-    /** A stack of ints, the depth of each value on the value stack. */
-    private static final class Depths {
-        private int[] items = new int[16];
-        private int size;
-
-        void push(int depth) {
-            if (size == items.length) {
-                items = Arrays.copyOf(items, 2 * size);
-            }
-            items[size++] = depth;
-        }
-
-        int pop() {
-            return items[--size];
-        }
-    }
-
-    /** The nesting of function applications in the atom's arguments, as {@link DepthLimit} counts it. */
-    private static int depthOf(RawAtomic atomic) {
-        if (atomic instanceof RawEquation equation) {
-            return Math.max(argumentDepth(equation.left()), argumentDepth(equation.right()));
-        }
-        return argumentDepth(((RawPredicateAtom) atomic).term());
-    }
-
-    private static int argumentDepth(RawTerm term) {
-        int deepest = 0;
-        for (RawTerm arg : term.args()) {
-            deepest = Math.max(deepest, applicationDepth(arg));
-        }
-        return deepest;
-    }
-
-    /** 0 for a name, 1 + the deepest argument for an application. Recurses as the parser did. */
-    private static int applicationDepth(RawTerm term) {
-        return term.args().isEmpty() ? 0 : 1 + argumentDepth(term);
+        return formula.finish();
     }
 
     RawAtomic atom(ParserRuleContext ctx) {

@@ -58,6 +58,9 @@ final class StatementStream<P extends Parser, S> {
         boolean startsStatement(int tokenType);
 
         S build(RawBuilder builder, ParserRuleContext statement) throws InputError;
+
+        /** The next statement read by the direct parser, or null at the end of the file. */
+        S direct(DirectParser parser) throws DirectParser.Bail;
     }
 
     /**
@@ -66,11 +69,22 @@ final class StatementStream<P extends Parser, S> {
      */
     static final boolean GENERATED_LEXER = "generated".equals(System.getProperty("assay.lexer"));
 
+    /**
+     * Whether to read every statement with the generated parser instead of trying {@link DirectParser} first
+     * (they build the same raw syntax; the generated one is the definition). Set with
+     * {@code -Dassay.parser=generated}; the generated lexer implies it.
+     */
+    static final boolean GENERATED_PARSER = GENERATED_LEXER || "generated".equals(System.getProperty("assay.parser"));
+
     private final String file;
     private final int maxDepth;
     private final Language<P, S> language;
     private final ReaderCharStream chars;
-    private final TokenSource lexer;
+    /** The lexer of the generated parser; with the direct parser, made again for each statement it hands over. */
+    private TokenSource lexer;
+    private final TokenTexts texts;
+    /** Null when every statement goes to the generated parser. */
+    private final DirectParser direct;
     /** Made by the first {@link #next}, since making one reads the first token. */
     private UnbufferedTokenStream<Token> tokens;
     private P parser;
@@ -80,6 +94,8 @@ final class StatementStream<P extends Parser, S> {
     private final BailErrorStrategy bail = new BailErrorStrategy();
     private final DepthLimit depth;
     private InputError failure;
+    /** Statements the direct parser gave up on that the generated parser then read: for tests, which expect none. */
+    int readAfterHandOver;
     private IOException readFailure;
     private boolean ended;
 
@@ -89,19 +105,27 @@ final class StatementStream<P extends Parser, S> {
 
     /** {@code maxTermSize} bounds the symbol occurrences of one statement. */
     StatementStream(String file, Reader input, int maxDepth, long maxTermSize, Language<P, S> language) {
+        this(file, input, maxDepth, maxTermSize, language, !GENERATED_PARSER);
+    }
+
+    /** {@code direct} says whether to try the {@link DirectParser} first; false reads with the generated parser only. */
+    StatementStream(String file, Reader input, int maxDepth, long maxTermSize, Language<P, S> language,
+                    boolean direct) {
         this.file = file;
         this.maxDepth = maxDepth;
         this.language = language;
         this.chars = new ReaderCharStream(file, input);
         // The window of the char stream holds only the current token's characters: tokens copy theirs.
+        this.texts = new TokenTexts(chars);
         if (GENERATED_LEXER) {
             AssayLexer generated = new AssayLexer(chars);
             generated.removeErrorListeners();
-            generated.setTokenFactory(new TokenTexts(chars));
+            generated.setTokenFactory(texts);
             this.lexer = generated;
-        } else {
-            this.lexer = new FastLexer(chars, new TokenTexts(chars));
+        } else if (!direct) {
+            this.lexer = new FastLexer(chars, texts);
         }
+        this.direct = direct && !GENERATED_LEXER ? new DirectParser(file, chars, maxDepth, maxTermSize) : null;
         this.rules = GrammarRule.tableFor(language.ruleNames());
         this.depth = new DepthLimit(file, maxDepth, maxTermSize, rules);
         this.builder = new RawBuilder(file, rules, maxDepth);
@@ -120,10 +144,11 @@ final class StatementStream<P extends Parser, S> {
             return null;
         }
         try {
+            if (direct != null) {
+                return directOrHandOver();
+            }
             if (tokens == null) {
-                tokens = new UnbufferedTokenStream<>(lexer, 256);
-                parser = language.newParser(tokens, depth);
-                parser.removeErrorListeners();
+                openTokens();
             }
             return parseOne();
         } catch (SyntaxFailure e) {
@@ -139,8 +164,51 @@ final class StatementStream<P extends Parser, S> {
         throw failure;
     }
 
+    /**
+     * The next statement by the direct parser; when it gives up, the same statement by the generated parser,
+     * which then says what is wrong, if anything. The direct parser goes on after the statement.
+     */
+    private S directOrHandOver() throws InputError {
+        int start = chars.index();
+        int line = direct.line();
+        int column = direct.column();
+        int marker = chars.mark();
+        try {
+            try {
+                S statement = language.direct(direct);
+                if (statement == null) {
+                    ended = true;
+                }
+                return statement;
+            } catch (DirectParser.Bail bail) {
+                chars.seek(start);
+            }
+            lexer = new FastLexer(chars, texts, line, column);
+            openTokens();
+            S statement = parseOne();
+            readAfterHandOver++;
+            // Back to the direct parser, at the first token of the next statement.
+            Token next = tokens.LT(1);
+            direct.moveTo(next.getStartIndex(), next.getLine(), next.getCharPositionInLine());
+            tokens = null;
+            parser = null;
+            return statement;
+        } finally {
+            chars.release(marker);
+        }
+    }
+
+    private void openTokens() {
+        tokens = new UnbufferedTokenStream<>(lexer, 256);
+        parser = language.newParser(tokens, depth);
+        parser.removeErrorListeners();
+    }
+
     /** Where the stream is now: the next token, or where reading stopped. */
     Location here() {
+        if (direct != null && tokens == null) {
+            return direct.next();
+        }
         if (tokens == null) {
             return new Location(file, 1, 1);
         }

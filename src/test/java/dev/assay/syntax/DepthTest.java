@@ -147,9 +147,24 @@ class DepthTest {
     }
 
     @Test
+    void theDirectParserDoesNotRecurse() throws Exception {
+        // On a thread with a small stack and no effective limit, the direct parser reads what would exhaust the stack
+        // of the generated one (next test).
+        String text = problem("(".repeat(LEVELS) + "not P(" + "f(".repeat(LEVELS) + "c" + ")".repeat(LEVELS + 1)
+                + ")".repeat(LEVELS));
+        ProblemStatement axiom = BigStack.run(() -> {
+            ProblemReader reader = new ProblemReader("deep.problem", new StringReader(text), Integer.MAX_VALUE);
+            reader.next();
+            return reader.next();
+        }, 256 * 1024);
+        assertInstanceOf(RawNot.class, ((Axiom) axiom).formula());
+    }
+
+    @Test
     void aStackOverflowBecomesAnInputError() {
-        // A thread with a small stack and no effective limit: the parser runs out of stack.
-        String text = problem("(".repeat(LEVELS) + "P" + ")".repeat(LEVELS));
+        // A thread with a small stack and no effective limit: the generated parser runs out of stack. The stray
+        // parenthesis at the end makes the direct parser hand the statement over to it.
+        String text = problem("(".repeat(LEVELS) + "P" + ")".repeat(LEVELS) + " )");
         InputError error = assertThrows(InputError.class, () -> BigStack.run(() -> {
             ProblemReader reader = new ProblemReader("deep.problem", new StringReader(text), Integer.MAX_VALUE);
             reader.next();
