@@ -57,6 +57,10 @@ final class DirectParser {
         for (int i = 0; i < words.length; i++) {
             KEYWORDS.put(spelt[i], words[i]);
         }
+        for (String keyword : KEYWORDS.keySet()) {
+            // advance() looks a name up only when it could be a keyword: two or more of the letters a to z.
+            if (!keyword.matches("[a-z][a-z]+")) throw new IllegalStateException("a keyword of another shape: " + keyword);
+        }
         SINGLE['('] = AssayLexer.LPAREN;
         SINGLE[','] = AssayLexer.COMMA;
         SINGLE[')'] = AssayLexer.RPAREN;
@@ -110,6 +114,13 @@ final class DirectParser {
         this.maxDepth = maxDepth;
         this.maxTermSize = maxTermSize;
         this.formula = new FormulaAssembler(maxDepth);
+        in.tagNames(DirectParser::nameType);
+    }
+
+    /** The token type of a name: its keyword's, or IDENT. Only names of two or more letters a to z can be keywords. */
+    private static int nameType(String name, boolean lowerCase) {
+        Integer keyword = lowerCase && name.length() > 1 ? KEYWORDS.get(name) : null;
+        return keyword == null ? AssayLexer.IDENT : keyword;
     }
 
     int line() {
@@ -648,14 +659,9 @@ final class DirectParser {
             return;
         }
         if ((c >= 'a' && c <= 'z') || (c >= 'A' && c <= 'Z') || c == '_') {
-            do {
-                in.consume();
-                column++;
-                c = in.LA(1);
-            } while ((c >= 'a' && c <= 'z') || (c >= 'A' && c <= 'Z') || c == '_' || (c >= '0' && c <= '9'));
-            text = in.textOf(tokenStart, in.index() - 1);
-            Integer keyword = KEYWORDS.get(text);
-            type = keyword == null ? AssayLexer.IDENT : keyword;
+            text = in.consumeName();
+            column += text.length();
+            type = in.nameTag;
             return;
         }
         if (c >= '0' && c <= '9') {

@@ -144,6 +144,98 @@ final class ReaderCharStream implements CharStream {
         return r;
     }
 
+    /**
+     * Consumes the characters of a name, {@code [A-Za-z0-9_]*} from here, and returns its text; {@link #nameTag} is
+     * then the tag of {@link #tagNames}'s tagger for it. For {@link DirectParser}, which tags keywords with their token
+     * type: one pass over the characters both finds the end and hashes them for the cache of recent names, and a
+     * name found there needs neither a new string nor a keyword lookup.
+     */
+    String consumeName() {
+        int length = 0;
+        int h = 0;
+        boolean lower = true;
+        while (true) {
+            int[] d = data;
+            int i = p + length;
+            int end = count;
+            while (i < end) {
+                int c = d[i];
+                if (c >= 'a' && c <= 'z') {
+                    h = 31 * h + c;
+                } else if ((c >= 'A' && c <= 'Z') || c == '_' || (c >= '0' && c <= '9')) {
+                    h = 31 * h + c;
+                    lower = false;
+                } else {
+                    break;
+                }
+                i++;
+            }
+            length = i - p;
+            if (i < end || !fill()) {
+                break;
+            }
+        }
+        String text;
+        if (length > SHORT_NAME) {
+            text = new String(data, p, length);
+            nameTag = tagger.applyAsInt(text, lower);
+        } else {
+            int slot = (h ^ (h >>> 11) ^ (h >>> 22)) & (names.length - 1);
+            int[] chars = nameChars[slot];
+            if (nameHashes[slot] == h && chars != null && sameChars(chars, p, length)) {
+                text = names[slot];
+                nameTag = nameTags[slot];
+            } else {
+                text = new String(data, p, length);
+                nameTag = tagger.applyAsInt(text, lower);
+                names[slot] = text;
+                nameHashes[slot] = h;
+                nameChars[slot] = Arrays.copyOfRange(data, p, p + length);
+                nameTags[slot] = nameTag;
+            }
+            p += length;
+            return text;
+        }
+        p += length;
+        return text;
+    }
+
+    /** What the tagger said of the name {@link #consumeName} returned last. */
+    int nameTag;
+
+    /** Tags a name, given whether it has only the letters a to z; the tag is cached with the name. */
+    interface NameTagger {
+        int applyAsInt(String name, boolean lowerCase);
+    }
+
+    private NameTagger tagger = (name, lowerCase) -> 0;
+
+    void tagNames(NameTagger tagger) {
+        this.tagger = tagger;
+        Arrays.fill(nameChars, null);
+    }
+
+    private static final int SHORT_NAME = 24;
+    private boolean sameChars(int[] chars, int at, int length) {
+        if (chars.length != length) {
+            return false;
+        }
+        int[] d = data;
+        for (int i = 0; i < length; i++) {
+            if (chars[i] != d[at + i]) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    /** The cache of recent names: text, hash and characters per slot. */
+    private final String[] names = new String[4096];
+    private final int[] nameHashes = new int[4096];
+    private final int[][] nameChars = new int[4096][];
+    private final int[] nameTags = new int[4096];
+
+
     /** Texts up to this many characters are looked up in {@link #recent}. */
     private static final int SHORT = 8;
     private final String[] recent = new String[512];
