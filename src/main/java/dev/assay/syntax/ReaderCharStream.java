@@ -36,8 +36,9 @@ final class ReaderCharStream implements CharStream {
     private boolean endOfInput;
     /** A high surrogate at the end of the last block, waiting for its partner. */
     private int pendingHigh = -1;
+    /** The line of the last character read, and the index of that line's first character. */
     private int line = 1;
-    private int column = 1;
+    private long lineStart;
 
     ReaderCharStream(String file, Reader reader) {
         this.file = file;
@@ -88,6 +89,17 @@ final class ReaderCharStream implements CharStream {
             throw new IllegalStateException("release() called with an invalid marker");
         }
         marks--;
+    }
+
+    /**
+     * Releases {@code marker} and every mark made after it: for a caller whose inner marks may have been left unreleased
+     * when the stack ran out.
+     */
+    void releaseFrom(int marker) {
+        if (-marker > marks) {
+            throw new IllegalStateException("releaseFrom() called with an invalid marker");
+        }
+        marks = -marker - 1;
     }
 
     @Override
@@ -273,31 +285,37 @@ final class ReaderCharStream implements CharStream {
             return false;
         }
         int added = count;
+        int[] d = data;
+        int n = count;
         for (int i = 0; i < read; i++) {
             char c = block[i];
+            if (c < Character.MIN_SURROGATE && pendingHigh < 0) {
+                d[n++] = c;
+                continue;
+            }
             if (pendingHigh >= 0) {
                 if (Character.isLowSurrogate(c)) {
-                    data[count++] = Character.toCodePoint((char) pendingHigh, c);
+                    d[n++] = Character.toCodePoint((char) pendingHigh, c);
                     pendingHigh = -1;
-                    column++;
                     continue;
                 }
-                data[count++] = pendingHigh;
+                d[n++] = pendingHigh;
                 pendingHigh = -1;
-                column++;
             }
             if (Character.isHighSurrogate(c)) {
                 pendingHigh = c;
                 continue;
             }
-            data[count++] = c;
-            if (c == '\n') {
+            d[n++] = c;
+        }
+        // The line and column of the end, for the message about bytes that are not UTF-8 that the next read may throw.
+        for (int i = count; i < n; i++) {
+            if (d[i] == '\n') {
                 line++;
-                column = 1;
-            } else {
-                column++;
+                lineStart = start + i + 1;
             }
         }
+        count = n;
         return count > added || fill();
     }
 
@@ -305,6 +323,7 @@ final class ReaderCharStream implements CharStream {
         try {
             return reader.read(block, 0, BLOCK);
         } catch (CharacterCodingException e) {
+            int column = (int) (start + count - lineStart) + 1;
             throw new SyntaxFailure(new InputError(new Location(file, line, column), "the file is not valid UTF-8 text"));
         } catch (IOException e) {
             // Not a fault of the input: the reader's caller gets it as the IOException it is.

@@ -194,7 +194,7 @@ final class StatementStream<P extends Parser, S> {
             parser = null;
             return statement;
         } finally {
-            chars.release(marker);
+            chars.releaseFrom(marker); // a StackOverflowError may have left the lexer's mark behind
         }
     }
 
