@@ -733,7 +733,7 @@ public final class Kernel {
         if (own.isEmpty() || theirs.isEmpty()) return b;
         Set<Variable> inA = theirs.size() > 8 ? new HashSet<>(theirs) : null;
         Set<Variable> taken = null;
-        Map<Variable, Term> renaming = null;
+        LinkedHashMap<Variable, Term> renaming = null;
         for (Variable v : own) {
             if (!(inA != null ? inA.contains(v) : theirs.contains(v))) continue;
             if (taken == null) {
@@ -750,7 +750,7 @@ public final class Kernel {
                 }
             }
         }
-        return renaming == null ? b : new Substitution(terms, renaming).apply(b);
+        return renaming == null ? b : Substitution.owning(terms, renaming).apply(b);
     }
 
     private static String withoutTrailingDigits(String name) {
