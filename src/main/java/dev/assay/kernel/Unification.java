@@ -291,10 +291,12 @@ public final class Unification {
             LinkedHashMap<Variable, Term> out = new LinkedHashMap<>();
             for (Variable v : vars) {
                 Term root = find(v);
+                Application schema = schemaOf(root);
                 Term value;
-                if (schemaOf(root) == null) {
-                    // A class without an application stands for its root, which resolve would return as it is.
-                    value = root;
+                if (schema == null || schema.isGround()) {
+                    // What resolve would return at once: the root of a class without an application, or the
+                    // class's ground application.
+                    value = schema == null ? root : schema;
                 } else {
                     if (solved == null) solved = new HashMap<>();
                     value = resolve(root, solved);
@@ -315,8 +317,9 @@ public final class Unification {
                     continue;
                 }
                 Application s = schemaOf(r);
-                if (s == null) {
-                    solved.put(r, r);
+                if (s == null || s.isGround()) {
+                    // A ground application stands for itself: its argument classes need not be resolved.
+                    solved.put(r, s == null ? r : s);
                     stack.pop();
                     continue;
                 }
