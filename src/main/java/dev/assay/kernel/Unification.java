@@ -87,7 +87,7 @@ public final class Unification {
         }
 
         /** Keyed by identity: terms are hash-consed, so equal terms are the same object. */
-        private final Map<Term, Node> nodes = new IdentityHashMap<>();
+        private final Map<Term, Node> nodes = new IdentityHashMap<>(8); // grows for larger problems
         private final Map<Variable, Path> boundAt = new HashMap<>();
 
         Solver(TermFactory terms) {
