@@ -57,10 +57,8 @@ import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.HashSet;
 import java.util.LinkedHashMap;
-import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Map;
-import java.util.Set;
 
 /**
  * Runs a certificate through the kernel: reads both files, resolves names, checks labels and premise order,
@@ -253,7 +251,8 @@ public final class Checker {
         /** Premises of every step up to the first empty clause. */
         final ProofGraph graph = new ProofGraph();
         final Map<String, Integer> axiomIndex = new HashMap<>();
-        final Map<String, Integer> byRule = new LinkedHashMap<>();
+        /** Accepted steps by rule name (a one-element array each, counted in place). */
+        final Map<String, int[]> byRule = new HashMap<>();
         /** The premises of the step being checked: graph numbers, and names when a listener wants them. */
         int[] premiseIds = new int[4];
         int premiseCount;
@@ -447,7 +446,7 @@ public final class Checker {
             }
             Fact fact = ((Outcome.Accepted) o).fact();
             int id = steps++;
-            byRule.merge(rule, 1, Integer::sum);
+            byRule.computeIfAbsent(rule, r -> new int[1])[0]++;
             live.put(label, new Live(fact, id, s.label().at().line(), s.label().at().column()));
             if (refutation == null) {
                 graph.add(premiseIds, premiseCount);
@@ -579,8 +578,9 @@ public final class Checker {
         private Substitution subst(RawSubstitution raw, Signature sig, Clause conclusion)
                 throws InputError, StepProblem {
             if (raw == null) return null;
-            Set<Variable> vars = new LinkedHashSet<>(conclusion.variables());
-            return resolver.substitution(raw, sig, vars);
+            // Only asked whether it holds a variable: the list itself for a few, a set for many.
+            List<Variable> vars = conclusion.variables();
+            return resolver.substitution(raw, sig, vars.size() <= 16 ? vars : new HashSet<>(vars));
         }
 
         private Fact premise(Name n, String label, String rule, List<String> premises) throws Stop {
@@ -627,7 +627,7 @@ public final class Checker {
 
         CheckResult result(long ms) {
             Map<String, Integer> ordered = new LinkedHashMap<>();
-            for (String r : RULES) if (byRule.containsKey(r)) ordered.put(r, byRule.get(r));
+            for (String r : RULES) if (byRule.containsKey(r)) ordered.put(r, byRule.get(r)[0]);
             List<IntroducedSymbol> introduced = new ArrayList<>();
             if (kernel != null) {
                 for (Signature.Entry e : kernel.signature().introduced()) {

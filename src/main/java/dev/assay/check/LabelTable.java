@@ -19,11 +19,18 @@ final class LabelTable {
     /** Adds the label's fingerprint; false when the fingerprint was present already. */
     boolean add(String label) {
         long f = fingerprint(label);
-        if (find(f) >= 0) return false;
         if ((count + 1) * 4L > slots.length * 3L) rehash(); // at most three quarters full
-        insert(f);
-        count++;
-        return true;
+        // One probe sequence: it ends at the fingerprint (present) or at the empty slot it goes into.
+        int mask = slots.length - 1;
+        for (int i = spread(f) & mask; ; i = (i + 1) & mask) {
+            long s = slots[i];
+            if (s == f) return false;
+            if (s == 0) {
+                slots[i] = f;
+                count++;
+                return true;
+            }
+        }
     }
 
     /** Whether a label with this label's fingerprint was added: true for every added label, rarely for others. */

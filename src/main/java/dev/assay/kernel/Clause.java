@@ -57,6 +57,12 @@ public final class Clause {
 
     /** Equal as sets of literals: same literals up to order, repetition and orientation of equations. */
     public boolean sameSet(Clause other) {
+        if (literals.size() <= 8 && other.literals.size() <= 8) {
+            // A few literals: each set contained in the other, without building either set.
+            for (Literal l : literals) if (!other.literals.contains(l)) return false;
+            for (Literal l : other.literals) if (!literals.contains(l)) return false;
+            return true;
+        }
         return asSet().equals(other.asSet());
     }
 
@@ -64,9 +70,17 @@ public final class Clause {
     public List<Variable> variables() {
         List<Variable> v = variables;
         if (v == null) {
-            Set<Variable> seen = new LinkedHashSet<>();
-            for (Literal l : literals) Terms.collectVariables(l.atom(), seen);
-            v = List.copyOf(seen);
+            long size = 0;
+            for (Literal l : literals) size += Math.min(l.atom().treeSize(), 65); // tree sizes can be huge
+            if (size <= 64) {
+                List<Variable> seen = new ArrayList<>();
+                for (Literal l : literals) Terms.collectSmall(l.atom(), seen);
+                v = List.copyOf(seen);
+            } else {
+                Set<Variable> seen = new LinkedHashSet<>();
+                for (Literal l : literals) Terms.collectVariables(l.atom(), seen);
+                v = List.copyOf(seen);
+            }
             variables = v;
         }
         return v;

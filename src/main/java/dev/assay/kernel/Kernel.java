@@ -26,12 +26,15 @@ public final class Kernel {
 
     private final Problem problem;
     private final TermFactory terms;
+    /** The empty substitution, for a side of a step that states none (substitutions are immutable). */
+    private final Substitution none;
     private final Signature signature;
     private final Map<String, Fact> axioms = new LinkedHashMap<>();
 
     public Kernel(Problem problem, TermFactory terms) {
         this.problem = problem;
         this.terms = terms;
+        this.none = Substitution.empty(terms);
         this.signature = new Signature(problem.signature());
         for (Map.Entry<String, Formula> e : problem.axioms().entrySet()) {
             axioms.put(e.getKey(), new Fact(this, e.getKey(), e.getValue(), null));
@@ -154,7 +157,7 @@ public final class Kernel {
                     + premise.label() + " does not evaluate to false, so it does not entail the clause",
                     Printer.clause(stated), Printer.formula(m));
         }
-        if (!Clausification.evaluate(m, Substitution.empty(terms), set)) return accept(label, stated);
+        if (!Clausification.evaluate(m, none, set)) return accept(label, stated);
         Clausification.Search found = Clausification.findTheta(terms, m, stated.literals());
         if (found.theta() != null && !Clausification.evaluate(m, found.theta(), set)) return accept(label, stated);
         String why = found.exhausted()
@@ -293,8 +296,8 @@ public final class Kernel {
                     Printer.clause(stated), null);
         }
         if (sa != null || sb != null) {
-            Substitution ta = sa != null ? sa : Substitution.empty(terms);
-            Substitution tb = sb != null ? sb : Substitution.empty(terms);
+            Substitution ta = sa != null ? sa : none;
+            Substitution tb = sb != null ? sb : none;
             bad = domain(rule, ta, a, stated);
             if (bad == null) bad = domain(rule, tb, b, stated);
             if (bad != null) return bad;
@@ -390,8 +393,8 @@ public final class Kernel {
         }
         String direction = leftToRight ? "->" : "<-";
         if (sa != null || sb != null) {
-            Substitution ta = sa != null ? sa : Substitution.empty(terms);
-            Substitution tb = sb != null ? sb : Substitution.empty(terms);
+            Substitution ta = sa != null ? sa : none;
+            Substitution tb = sb != null ? sb : none;
             bad = domain(rule, ta, a, stated);
             if (bad == null) bad = domain(rule, tb, b, stated);
             if (bad != null) return bad;
@@ -733,7 +736,7 @@ public final class Kernel {
         if (own.isEmpty() || theirs.isEmpty()) return b;
         Set<Variable> inA = theirs.size() > 8 ? new HashSet<>(theirs) : null;
         Set<Variable> taken = null;
-        Map<Variable, Term> renaming = null;
+        LinkedHashMap<Variable, Term> renaming = null;
         for (Variable v : own) {
             if (!(inA != null ? inA.contains(v) : theirs.contains(v))) continue;
             if (taken == null) {
@@ -750,7 +753,7 @@ public final class Kernel {
                 }
             }
         }
-        return renaming == null ? b : new Substitution(terms, renaming).apply(b);
+        return renaming == null ? b : Substitution.owning(terms, renaming).apply(b);
     }
 
     private static String withoutTrailingDigits(String name) {

@@ -72,12 +72,14 @@ public final class TermFactory {
                 throw new IllegalArgumentException("atom " + a + " used as an argument of " + symbol);
             }
         }
+        // Looked up with the caller's array, which the probe does not keep; a term made anew gets a copy of its own,
+        // and its key is hashed from that copy.
+        Held held = applications.get(new Shape(symbol, arguments, Application.shapeHash(symbol, arguments)));
+        Application found = held == null ? null : held.get();
+        if (found != null) return found;
         Term[] copy = arguments.length == 0 ? arguments : Arrays.copyOf(arguments, arguments.length);
         int hash = Application.shapeHash(symbol, copy);
         Shape shape = new Shape(symbol, copy, hash);
-        Held held = applications.get(shape);
-        Application found = held == null ? null : held.get();
-        if (found != null) return found;
         dropCollected();
         Application[] made = new Application[1];
         applications.compute(shape, (k, old) -> {

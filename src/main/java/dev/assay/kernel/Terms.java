@@ -95,6 +95,19 @@ final class Terms {
         }
     }
 
+    /**
+     * {@link #collectVariables} on a small tree into a list that holds each variable once: the same variables in the
+     * same order, without hashing (for a few variables, looking through the list costs less).
+     */
+    static void collectSmall(Term t, List<Variable> into) {
+        if (t.isGround()) return;
+        if (t instanceof Variable v) {
+            if (!into.contains(v)) into.add(v);
+            return;
+        }
+        for (Term arg : ((Application) t).argumentArray()) collectSmall(arg, into);
+    }
+
     /** {@link #collectVariables} on a small tree: pre-order, left to right, without a visited set. */
     private static void collectSmall(Term t, Set<Variable> into) {
         if (t.isGround()) return;

@@ -2,6 +2,7 @@ package dev.assay.kernel;
 
 import java.util.ArrayDeque;
 import java.util.ArrayList;
+import java.util.Collection;
 import java.util.HashMap;
 import java.util.IdentityHashMap;
 import java.util.LinkedHashMap;
@@ -86,7 +87,7 @@ public final class Unification {
         }
 
         /** Keyed by identity: terms are hash-consed, so equal terms are the same object. */
-        private final Map<Term, Node> nodes = new IdentityHashMap<>();
+        private final Map<Term, Node> nodes = new IdentityHashMap<>(8); // grows for larger problems
         private final Map<Variable, Path> boundAt = new HashMap<>();
 
         Solver(TermFactory terms) {
@@ -108,30 +109,43 @@ public final class Unification {
         }
 
         Application schemaOf(Term root) {
-            Node n = nodes.get(root);
+            return schemaOf(root, nodes.get(root));
+        }
+
+        Variable variableOf(Term root) {
+            return variableOf(root, nodes.get(root));
+        }
+
+        /** The schema of the class of {@code root}, given the root's record {@code n} (null when it has none). */
+        private static Application schemaOf(Term root, Node n) {
             if (n != null && n.schema != null) return n.schema;
             return root instanceof Application app ? app : null;
         }
 
-        Variable variableOf(Term root) {
-            Node n = nodes.get(root);
+        private static Variable variableOf(Term root, Node n) {
             if (n != null && n.variable != null) return n.variable;
             return root instanceof Variable var ? var : null;
         }
 
-        private Node node(Term t) {
-            return nodes.computeIfAbsent(t, k -> new Node());
-        }
-
-        void union(Term a, Term b) {
-            Node na = node(a);
-            Node nb = node(b);
-            Node top = na.rank >= nb.rank ? na : nb;
-            Term topTerm = top == na ? a : b;
-            Term lowTerm = top == na ? b : a;
-            Node low = top == na ? nb : na;
-            Application sch = schemaOf(topTerm) != null ? schemaOf(topTerm) : schemaOf(lowTerm);
-            Variable var = variableOf(topTerm) != null ? variableOf(topTerm) : variableOf(lowTerm);
+        /** Merges the classes of the roots {@code a} and {@code b}, given their records (null when they have none). */
+        void union(Term a, Node na, Term b, Node nb) {
+            if (na == null) {
+                na = new Node();
+                nodes.put(a, na);
+            }
+            if (nb == null) {
+                nb = new Node();
+                nodes.put(b, nb);
+            }
+            boolean aOnTop = na.rank >= nb.rank;
+            Node top = aOnTop ? na : nb;
+            Node low = aOnTop ? nb : na;
+            Term topTerm = aOnTop ? a : b;
+            Term lowTerm = aOnTop ? b : a;
+            Application sch = schemaOf(topTerm, top);
+            if (sch == null) sch = schemaOf(lowTerm, low);
+            Variable var = variableOf(topTerm, top);
+            if (var == null) var = variableOf(lowTerm, low);
             low.parent = topTerm;
             if (na.rank == nb.rank) top.rank++;
             if (sch != null) top.schema = sch;
@@ -147,20 +161,22 @@ public final class Unification {
                 Term rl = find(g.left);
                 Term rr = find(g.right);
                 if (rl == rr) continue;
-                Application sl = schemaOf(rl);
-                Application sr = schemaOf(rr);
+                Node nl = nodes.get(rl);
+                Node nr = nodes.get(rr);
+                Application sl = schemaOf(rl, nl);
+                Application sr = schemaOf(rr, nr);
                 if (sl != null && sr != null) {
                     if (!sl.symbol().equals(sr.symbol())) return clash(g, sl, sr);
-                    union(rl, rr);
+                    union(rl, nl, rr, nr);
                     for (int i = sl.arity() - 1; i >= 0; i--) {
                         stack.push(new Goal(sl.argument(i), sr.argument(i), new Path(g.path, i + 1)));
                     }
                 } else {
-                    Variable vl = variableOf(rl);
-                    Variable vr = variableOf(rr);
+                    Variable vl = variableOf(rl, nl);
+                    Variable vr = variableOf(rr, nr);
                     if (vl != null && (sl != null || sr != null) && !boundAt.containsKey(vl)) boundAt.put(vl, g.path);
                     if (vr != null && (sl != null || sr != null) && !boundAt.containsKey(vr)) boundAt.put(vr, g.path);
-                    union(rl, rr);
+                    union(rl, nl, rr, nr);
                 }
             }
             // A cycle needs a class holding both a variable and an application, and every merge that makes one
@@ -259,15 +275,35 @@ public final class Unification {
         }
 
         private Substitution build(List<Term[]> pairs) {
-            Set<Variable> vars = new LinkedHashSet<>();
-            for (Term[] pair : pairs) for (Term t : pair) Terms.collectVariables(t, vars);
-            Map<Term, Term> solved = new HashMap<>();
-            Map<Variable, Term> out = new LinkedHashMap<>();
+            long size = 0;
+            for (Term[] pair : pairs) for (Term t : pair) size += Math.min(t.treeSize(), 65); // tree sizes can be huge
+            Collection<Variable> vars;
+            if (size <= 64) {
+                List<Variable> few = new ArrayList<>();
+                for (Term[] pair : pairs) for (Term t : pair) Terms.collectSmall(t, few);
+                vars = few;
+            } else {
+                Set<Variable> many = new LinkedHashSet<>();
+                for (Term[] pair : pairs) for (Term t : pair) Terms.collectVariables(t, many);
+                vars = many;
+            }
+            Map<Term, Term> solved = null;
+            LinkedHashMap<Variable, Term> out = new LinkedHashMap<>();
             for (Variable v : vars) {
-                Term value = resolve(find(v), solved);
+                Term root = find(v);
+                Application schema = schemaOf(root);
+                Term value;
+                if (schema == null || schema.isGround()) {
+                    // What resolve would return at once: the root of a class without an application, or the
+                    // class's ground application.
+                    value = schema == null ? root : schema;
+                } else {
+                    if (solved == null) solved = new HashMap<>();
+                    value = resolve(root, solved);
+                }
                 if (value != v) out.put(v, value);
             }
-            return new Substitution(terms, out);
+            return Substitution.owning(terms, out);
         }
 
         /** The term a class stands for, with every argument class resolved; the graph is acyclic here. */
@@ -281,8 +317,9 @@ public final class Unification {
                     continue;
                 }
                 Application s = schemaOf(r);
-                if (s == null) {
-                    solved.put(r, r);
+                if (s == null || s.isGround()) {
+                    // A ground application stands for itself: its argument classes need not be resolved.
+                    solved.put(r, s == null ? r : s);
                     stack.pop();
                     continue;
                 }

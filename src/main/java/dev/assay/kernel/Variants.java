@@ -57,8 +57,11 @@ final class Variants {
             for (int i = 1; same && i <= a.width(); i++) same = a.literal(i).equals(b.literal(i));
             if (same) return true;
         }
-        List<Literal> la = new ArrayList<>(a.asSet());
-        List<Literal> lb = new ArrayList<>(b.asSet());
+        // Equal as sets: the identity renaming does it too (the common case when the certificate's variables are
+        // those the unifier kept, in another order of literals).
+        if (a.width() <= 8 && b.width() <= 8 && a.sameSet(b)) return true;
+        List<Literal> la = distinct(a);
+        List<Literal> lb = distinct(b);
         if (la.size() != lb.size()) return false;
         if (la.isEmpty()) return true;
         // Fast path: certificates usually state a derived clause in the order it was derived. Pairing the literals
@@ -95,6 +98,15 @@ final class Variants {
         List<List<Literal>> candidates = new ArrayList<>();
         for (Literal l : la) candidates.add(byShape.get(keyA.get(l)));
         return new Search(la, candidates, budget).run();
+    }
+
+    /** The literals of {@code c} as a set, in order of first occurrence, as {@link Clause#asSet()} has them. */
+    private static List<Literal> distinct(Clause c) {
+        if (c.width() > 8) return new ArrayList<>(c.asSet());
+        // A few literals: comparing each with those kept costs less than a hash set.
+        List<Literal> out = new ArrayList<>(c.width());
+        for (Literal l : c.literals()) if (!out.contains(l)) out.add(l);
+        return out;
     }
 
     /** In how many literals each variable occurs: a renaming keeps these counts. */
@@ -144,11 +156,17 @@ final class Variants {
         private final Map<Variable, Variable> backward = new HashMap<>();
         private final ArrayList<Variable> trail = new ArrayList<>();
         private final IdentityHashMap<Literal, Boolean> used = new IdentityHashMap<>();
+        /** The distinct variables of each literal, made when {@link #next} first scores it. */
+        private final Variable[][] variablesOf;
+        /** The memo and the work stack of {@link #matchTerms}, cleared on each call (a large memo is replaced). */
+        private Map<Term, Term> mapped = new HashMap<>();
+        private final ArrayDeque<Term> stack = new ArrayDeque<>();
 
         Search(List<Literal> literals, List<List<Literal>> candidates, long budget) {
             this.literals = literals;
             this.candidates = candidates;
             this.budget = budget;
+            this.variablesOf = new Variable[literals.size()][];
         }
 
         boolean run() {
@@ -216,8 +234,13 @@ final class Variants {
                 if (placed[i]) continue;
                 if (candidates.get(i).size() == 1) return i;
                 int score = 0;
-                Set<Variable> vs = new LinkedHashSet<>();
-                Terms.collectVariables(literals.get(i).atom(), vs);
+                Variable[] vs = variablesOf[i];
+                if (vs == null) {
+                    Set<Variable> seen = new LinkedHashSet<>();
+                    Terms.collectVariables(literals.get(i).atom(), seen);
+                    vs = seen.toArray(new Variable[0]);
+                    variablesOf[i] = vs;
+                }
                 for (Variable v : vs) if (forward.containsKey(v)) score++;
                 if (score > bestScore) {
                     best = i;
@@ -249,8 +272,9 @@ final class Variants {
         private boolean matchTerms(Term s, Term t) {
             // A renaming maps each term to one term, so a subterm already mapped onto y needs no second walk, and one
             // mapped onto something else fails: shared subterms are visited once, not once per path.
-            Map<Term, Term> mapped = new HashMap<>();
-            ArrayDeque<Term> stack = new ArrayDeque<>();
+            if (mapped.size() > 64) mapped = new HashMap<>();
+            else mapped.clear();
+            stack.clear();
             stack.push(s);
             stack.push(t);
             while (!stack.isEmpty()) {

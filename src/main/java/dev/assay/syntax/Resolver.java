@@ -14,6 +14,7 @@ import dev.assay.kernel.TermFactory;
 import dev.assay.kernel.Variable;
 
 import java.util.ArrayList;
+import java.util.Collection;
 import java.util.HashMap;
 import java.util.HashSet;
 import java.util.LinkedHashMap;
@@ -204,7 +205,7 @@ public final class Resolver {
     }
 
     /** A substitution of a step whose conclusion has {@code conclusionVariables}. */
-    public Substitution substitution(RawSubstitution s, Signature signature, Set<Variable> conclusionVariables)
+    public Substitution substitution(RawSubstitution s, Signature signature, Collection<Variable> conclusionVariables)
             throws InputError, StepProblem {
         Scope scope = new Scope(signature, Set.of());
         Map<Variable, Term> bindings = new LinkedHashMap<>();
@@ -220,7 +221,8 @@ public final class Resolver {
         return new Substitution(terms, bindings);
     }
 
-    private void collectRangeVariables(RawTerm t, Scope scope, Set<Variable> conclusionVariables, Set<String> out) {
+    private void collectRangeVariables(RawTerm t, Scope scope, Collection<Variable> conclusionVariables,
+                                       Set<String> out) {
         if (t.args().isEmpty()) {
             boolean conclusionVar = conclusionVariables.contains(terms.variable(t.name()));
             if (conclusionVar || scope.signature.lookup(t.name()) == null) out.add(t.name());
@@ -265,7 +267,7 @@ public final class Resolver {
     }
 
     private Clause clause(RawClause c, Scope scope) throws InputError, StepProblem {
-        Set<String> vars = new LinkedHashSet<>();
+        Set<String> vars = c.variables() == null ? Set.of() : new HashSet<>();
         if (c.variables() != null) {
             for (Name n : c.variables()) {
                 if (!vars.add(n.text())) throw new StepProblem(n.at(), "the variable " + n.text() + " is listed twice");
