@@ -199,6 +199,8 @@ final class ReaderCharStream implements CharStream {
                 nameTag = nameTags[slot];
             } else {
                 text = new String(data, p, length);
+                // Hashed here, on the reading thread when it reads ahead: the checker looks every name up by it.
+                text.hashCode();
                 nameTag = tagger.applyAsInt(text, lower);
                 names[slot] = text;
                 nameHashes[slot] = h;
