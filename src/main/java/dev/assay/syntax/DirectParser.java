@@ -3,7 +3,6 @@ package dev.assay.syntax;
 import dev.assay.syntax.grammar.AssayLexer;
 import java.util.ArrayList;
 import java.util.Arrays;
-import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 import org.antlr.v4.runtime.IntStream;
@@ -39,50 +38,19 @@ final class DirectParser {
     }
 
     private static final int EOF = IntStream.EOF;
-    private static final Map<String, Integer> KEYWORDS = new HashMap<>();
-    private static final int[] SINGLE = new int[0x2300];
+    private static final Map<String, Integer> KEYWORDS = FastLexer.KEYWORDS;
+    private static final int[] SINGLE = FastLexer.SINGLE;
     private static final String[] SPELLING = new String[AssayLexer.VOCABULARY.getMaxTokenType() + 1];
 
     static {
         for (int type = 1; type <= AssayLexer.VOCABULARY.getMaxTokenType(); type++) {
             String literal = AssayLexer.VOCABULARY.getLiteralName(type);
-            if (literal == null) continue;
-            String text = literal.substring(1, literal.length() - 1);
-            SPELLING[type] = text;
-            if (Character.isLetter(text.charAt(0))) KEYWORDS.put(text, type);
-        }
-        int[] words = {AssayLexer.FORALL, AssayLexer.EXISTS, AssayLexer.NOT, AssayLexer.AND, AssayLexer.OR,
-            AssayLexer.IMPLIES, AssayLexer.IFF, AssayLexer.TRUE, AssayLexer.FALSE};
-        String[] spelt = {"forall", "exists", "not", "and", "or", "implies", "iff", "true", "false"};
-        for (int i = 0; i < words.length; i++) {
-            KEYWORDS.put(spelt[i], words[i]);
+            if (literal != null) SPELLING[type] = literal.substring(1, literal.length() - 1);
         }
         for (String keyword : KEYWORDS.keySet()) {
             // advance() looks a name up only when it could be a keyword: two or more of the letters a to z.
             if (!keyword.matches("[a-z][a-z]+")) throw new IllegalStateException("a keyword of another shape: " + keyword);
         }
-        SINGLE['('] = AssayLexer.LPAREN;
-        SINGLE[','] = AssayLexer.COMMA;
-        SINGLE[')'] = AssayLexer.RPAREN;
-        SINGLE['.'] = AssayLexer.DOT;
-        SINGLE['='] = AssayLexer.EQ;
-        SINGLE['['] = AssayLexer.LBRACKET;
-        SINGLE[']'] = AssayLexer.RBRACKET;
-        SINGLE['{'] = AssayLexer.LBRACE;
-        SINGLE['}'] = AssayLexer.RBRACE;
-        SINGLE['@'] = AssayLexer.AT;
-        SINGLE['/'] = AssayLexer.SLASH;
-        SINGLE['\u2200'] = AssayLexer.FORALL;
-        SINGLE['\u2203'] = AssayLexer.EXISTS;
-        SINGLE['\u00ac'] = AssayLexer.NOT;
-        SINGLE['\u2227'] = AssayLexer.AND;
-        SINGLE['\u2228'] = AssayLexer.OR;
-        SINGLE['\u2192'] = AssayLexer.IMPLIES;
-        SINGLE['\u2194'] = AssayLexer.IFF;
-        SINGLE['\u22a4'] = AssayLexer.TRUE;
-        SINGLE['\u22a5'] = AssayLexer.FALSE;
-        SINGLE['\u2260'] = AssayLexer.NEQ;
-        SINGLE['\u21a6'] = AssayLexer.ASSIGN;
     }
 
     private final String file;
@@ -693,13 +661,7 @@ final class DirectParser {
                 }
             }
         }
-        int pair = switch (c) {
-            case ':' -> in.LA(2) == '=' ? AssayLexer.ASSIGN : AssayLexer.COLON;
-            case '!' -> in.LA(2) == '=' ? AssayLexer.NEQ : 0;
-            case '-' -> in.LA(2) == '>' ? AssayLexer.RIGHT_ARROW : 0;
-            case '<' -> in.LA(2) == '-' ? AssayLexer.LEFT_ARROW : 0;
-            default -> -1;
-        };
+        int pair = FastLexer.pairType(c, in.LA(2));
         in.consume();
         column++;
         if (pair > 0) {

@@ -35,8 +35,10 @@ import org.antlr.v4.runtime.misc.Pair;
  */
 final class FastLexer implements TokenSource {
 
-    private static final Map<String, Integer> KEYWORDS = new HashMap<>();
-    private static final int[] SINGLE = new int[0x2300];
+    /** Keywords by spelling, with their token types; also used by {@link DirectParser}. */
+    static final Map<String, Integer> KEYWORDS = new HashMap<>();
+    /** The token type of each one-character token (punctuation and the Unicode spellings), else 0. */
+    static final int[] SINGLE = new int[0x2300];
 
     static {
         for (int type = 1; type <= AssayLexer.VOCABULARY.getMaxTokenType(); type++) {
@@ -166,13 +168,7 @@ final class FastLexer implements TokenSource {
                 if (c == '"') return AssayLexer.STRING;
             }
         }
-        int pair = switch (c) {
-            case ':' -> in.LA(2) == '=' ? AssayLexer.ASSIGN : AssayLexer.COLON;
-            case '!' -> in.LA(2) == '=' ? AssayLexer.NEQ : 0;
-            case '-' -> in.LA(2) == '>' ? AssayLexer.RIGHT_ARROW : 0;
-            case '<' -> in.LA(2) == '-' ? AssayLexer.LEFT_ARROW : 0;
-            default -> -1;
-        };
+        int pair = pairType(c, in.LA(2));
         if (pair > 0) {
             consume(c);
             if (pair != AssayLexer.COLON) consume(in.LA(1));
@@ -182,6 +178,21 @@ final class FastLexer implements TokenSource {
         if (pair == 0) return AssayLexer.ILLEGAL_CHARACTER;
         int single = c < SINGLE.length ? SINGLE[c] : 0;
         return single != 0 ? single : AssayLexer.ILLEGAL_CHARACTER;
+    }
+
+    /**
+     * For a character {@code c} followed by {@code next}: the type of the two-character token they make ({@code :=},
+     * {@code !=}, {@code ->}, {@code <-}), COLON for a lone {@code :}, 0 for a lone {@code !}, {@code -} or {@code <}
+     * (an illegal character), and -1 when {@code c} starts no such token.
+     */
+    static int pairType(int c, int next) {
+        return switch (c) {
+            case ':' -> next == '=' ? AssayLexer.ASSIGN : AssayLexer.COLON;
+            case '!' -> next == '=' ? AssayLexer.NEQ : 0;
+            case '-' -> next == '>' ? AssayLexer.RIGHT_ARROW : 0;
+            case '<' -> next == '-' ? AssayLexer.LEFT_ARROW : 0;
+            default -> -1;
+        };
     }
 
     private void consume(int c) {
