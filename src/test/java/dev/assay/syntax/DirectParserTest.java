@@ -4,6 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.assay.fuzz.CertificateGen;
+import dev.assay.fuzz.FuzzScale;
 import dev.assay.fuzz.NearValid;
 import dev.assay.fuzz.ProblemGen;
 import dev.assay.fuzz.SyntaxGen;
@@ -24,7 +25,8 @@ import org.junit.jupiter.api.Test;
  * same locations, and, where the text is wrong or over a limit, the same error at the same
  * statement (it hands such a statement over, and the generated parser words the message). Each
  * input is read twice, once by the generated parser alone and once by the direct parser with
- * hand-over, and the two transcripts must be equal.
+ * hand-over, and the two transcripts must be equal. {@code -Dassay.fuzz=long} multiplies the random inputs by
+ * {@code assay.fuzz.factor} (see {@link FuzzScale}).
  */
 class DirectParserTest {
 
@@ -197,7 +199,7 @@ class DirectParserTest {
     void randomProblemsAndCertificatesReadTheSame() throws Exception {
         onBigStack(() -> {
             Random seeds = new Random(20261203);
-            for (int i = 0; i < 400; i++) {
+            for (int i = 0; i < 400 * FuzzScale.factor(); i++) {
                 Random random = new Random(seeds.nextLong());
                 SyntaxGen g = new SyntaxGen(random, i % 3 == 0 ? 0 : 40);
                 ProblemGen.Generated p = ProblemGen.generate(g, 1 + random.nextInt(5), random.nextInt(6));
@@ -217,13 +219,13 @@ class DirectParserTest {
             // The fuzzer's near-valid changes (dropped, doubled and swapped tokens, misspelt keywords, huge numbers, deep
             // nesting, stray characters) on every bundled file: nearly all end in an error, which must be the same one.
             Random random = new Random(20261204);
-            NearValid mutator = new NearValid(random, 300);
+            NearValid mutator = new NearValid(random, FuzzScale.isLong() ? 3_000 : 300);
             int n = 0;
             for (Path file : bundledFiles()) {
                 String text = text(file);
                 if (text == null) continue;
                 boolean problem = file.toString().endsWith(".problem");
-                for (int i = 0; i < 4; i++) {
+                for (int i = 0; i < 4 * FuzzScale.factor(); i++) {
                     NearValid.Mutant m = mutator.mutate(text);
                     String changed = new String(m.bytes(), StandardCharsets.UTF_8);
                     if (!Arrays.equals(changed.getBytes(StandardCharsets.UTF_8), m.bytes())) continue;
@@ -246,7 +248,7 @@ class DirectParserTest {
                 "0", "1", "12", "\"s\"", "(", ")", ",", ".", ":", "=", "!=", ":=", "[", "]", "{", "}", "->", "<-", "@", "/",
                 "¬", "∀", "↦", "!", "#c\n", "\n", "\"open"};
             Random random = new Random(20261205);
-            for (int i = 0; i < 3_000; i++) {
+            for (int i = 0; i < 3_000 * FuzzScale.factor(); i++) {
                 boolean problem = random.nextBoolean();
                 StringBuilder text = new StringBuilder(problem ? "problem p\n" : "certificate for p\n");
                 int statements = 1 + random.nextInt(3);
