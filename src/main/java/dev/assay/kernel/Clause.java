@@ -70,17 +70,9 @@ public final class Clause {
     public List<Variable> variables() {
         List<Variable> v = variables;
         if (v == null) {
-            long size = 0;
-            for (Literal l : literals) size += Math.min(l.atom().treeSize(), 65); // tree sizes can be huge
-            if (size <= 64) {
-                List<Variable> seen = new ArrayList<>();
-                for (Literal l : literals) Terms.collectSmall(l.atom(), seen);
-                v = List.copyOf(seen);
-            } else {
-                Set<Variable> seen = new LinkedHashSet<>();
-                for (Literal l : literals) Terms.collectVariables(l.atom(), seen);
-                v = List.copyOf(seen);
-            }
+            List<Application> atoms = new ArrayList<>(literals.size());
+            for (Literal l : literals) atoms.add(l.atom());
+            v = List.copyOf(Terms.variablesOf(atoms));
             variables = v;
         }
         return v;

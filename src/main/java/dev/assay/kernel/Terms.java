@@ -8,6 +8,7 @@ import java.util.function.BiFunction;
 import java.util.function.Function;
 import java.util.Collections;
 import java.util.IdentityHashMap;
+import java.util.LinkedHashSet;
 import java.util.Set;
 import java.util.function.Consumer;
 
@@ -96,10 +97,25 @@ final class Terms {
     }
 
     /**
-     * {@link #collectVariables} on a small tree into a list that holds each variable once: the same variables in the
-     * same order, without hashing (for a few variables, looking through the list costs less).
+     * The variables of {@code roots}, in left-to-right order of first occurrence, as {@link #collectVariables} adds them
+     * root after root. When the trees together have at most 64 nodes the variables are gathered in a list without
+     * hashing (for a few variables, looking through the list costs less); beyond, in a linked hash set.
      */
-    static void collectSmall(Term t, List<Variable> into) {
+    static List<Variable> variablesOf(Iterable<? extends Term> roots) {
+        long size = 0;
+        for (Term t : roots) size += Math.min(t.treeSize(), 65); // tree sizes can be huge
+        if (size <= 64) {
+            List<Variable> few = new ArrayList<>();
+            for (Term t : roots) collectSmall(t, few);
+            return few;
+        }
+        Set<Variable> many = new LinkedHashSet<>();
+        for (Term t : roots) collectVariables(t, many);
+        return new ArrayList<>(many);
+    }
+
+    /** {@link #collectVariables} on a small tree into a list that holds each variable once. */
+    private static void collectSmall(Term t, List<Variable> into) {
         if (t.isGround()) return;
         if (t instanceof Variable v) {
             if (!into.contains(v)) into.add(v);

@@ -2,14 +2,12 @@ package dev.assay.kernel;
 
 import java.util.ArrayDeque;
 import java.util.ArrayList;
-import java.util.Collection;
+import java.util.Arrays;
 import java.util.HashMap;
 import java.util.IdentityHashMap;
 import java.util.LinkedHashMap;
-import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Map;
-import java.util.Set;
 
 /**
  * Most general unifiers with the occurs check, on the shared term graph.
@@ -275,18 +273,9 @@ public final class Unification {
         }
 
         private Substitution build(List<Term[]> pairs) {
-            long size = 0;
-            for (Term[] pair : pairs) for (Term t : pair) size += Math.min(t.treeSize(), 65); // tree sizes can be huge
-            Collection<Variable> vars;
-            if (size <= 64) {
-                List<Variable> few = new ArrayList<>();
-                for (Term[] pair : pairs) for (Term t : pair) Terms.collectSmall(t, few);
-                vars = few;
-            } else {
-                Set<Variable> many = new LinkedHashSet<>();
-                for (Term[] pair : pairs) for (Term t : pair) Terms.collectVariables(t, many);
-                vars = many;
-            }
+            List<Term> roots = new ArrayList<>(2 * pairs.size());
+            for (Term[] pair : pairs) roots.addAll(Arrays.asList(pair));
+            List<Variable> vars = Terms.variablesOf(roots);
             Map<Term, Term> solved = null;
             LinkedHashMap<Variable, Term> out = new LinkedHashMap<>();
             for (Variable v : vars) {

@@ -46,10 +46,10 @@ final class Variants {
         }
     }
 
-    /** True when {@code a} and {@code b} are variants of each other; false also when the budget ran out. */
     /** Clauses of at most this many distinct literals skip the grouping by skeleton. */
     private static final int SMALL = 4;
 
+    /** True when {@code a} and {@code b} are variants of each other; false also when the budget ran out. */
     static boolean areVariants(Clause a, Clause b, long budget) {
         // Equal as written, literal by literal: the identity renaming does it (the common case for ground clauses).
         if (a.width() == b.width()) {
@@ -236,9 +236,7 @@ final class Variants {
                 int score = 0;
                 Variable[] vs = variablesOf[i];
                 if (vs == null) {
-                    Set<Variable> seen = new LinkedHashSet<>();
-                    Terms.collectVariables(literals.get(i).atom(), seen);
-                    vs = seen.toArray(new Variable[0]);
+                    vs = Terms.variablesOf(List.of(literals.get(i).atom())).toArray(new Variable[0]);
                     variablesOf[i] = vs;
                 }
                 for (Variable v : vs) if (forward.containsKey(v)) score++;
