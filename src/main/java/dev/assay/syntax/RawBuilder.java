@@ -67,26 +67,28 @@ final class RawBuilder {
     private String digest(Token string) throws InputError {
         String text = string.getText();
         String content = text.substring(1, text.length() - 1);
+        String digits = digestDigits(content);
+        if (digits != null) {
+            return digits;
+        }
+        // Refused: say why.
         String prefix = "sha256:";
         if (!content.startsWith(prefix)) {
             throw new InputError(at(string), "a digest is written \"sha256:\" and 64 hexadecimal digits, found "
                     + shorten(text));
         }
-        String digits = content.substring(prefix.length());
-        for (int i = 0; i < digits.length(); i++) {
-            if (!isHexDigit(digits.charAt(i))) {
+        String written = content.substring(prefix.length());
+        for (int i = 0; i < written.length(); i++) {
+            if (!isHexDigit(written.charAt(i))) {
                 int column = string.getCharPositionInLine() + 2 + content.codePointCount(0, prefix.length() + i);
                 throw new InputError(new Location(file, string.getLine(), column),
-                        "a digest has only hexadecimal digits, found " + SyntaxErrors.showCharacter(digits.codePointAt(i)));
+                        "a digest has only hexadecimal digits, found " + SyntaxErrors.showCharacter(written.codePointAt(i)));
             }
         }
-        if (digits.length() != 64) {
-            throw new InputError(at(string), "a SHA-256 digest has 64 hexadecimal digits, found " + digits.length());
-        }
-        return digits.toLowerCase(Locale.ROOT);
+        throw new InputError(at(string), "a SHA-256 digest has 64 hexadecimal digits, found " + written.length());
     }
 
-    /** The digits of a digest string's content in lower case, or null when {@link #digest} would refuse it. */
+    /** The digits of a digest string's content in lower case, or null when it is not "sha256:" and 64 hexadecimal digits. */
     static String digestDigits(String content) {
         String prefix = "sha256:";
         if (!content.startsWith(prefix) || content.length() != prefix.length() + 64) {
