@@ -4,7 +4,6 @@ import dev.assay.syntax.grammar.AssayLexer;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
-import java.util.Map;
 import org.antlr.v4.runtime.IntStream;
 
 /**
@@ -38,7 +37,6 @@ final class DirectParser {
     }
 
     private static final int EOF = IntStream.EOF;
-    private static final Map<String, Integer> KEYWORDS = FastLexer.KEYWORDS;
     private static final int[] SINGLE = FastLexer.SINGLE;
     private static final String[] SPELLING = new String[AssayLexer.VOCABULARY.getMaxTokenType() + 1];
 
@@ -46,10 +44,6 @@ final class DirectParser {
         for (int type = 1; type <= AssayLexer.VOCABULARY.getMaxTokenType(); type++) {
             String literal = AssayLexer.VOCABULARY.getLiteralName(type);
             if (literal != null) SPELLING[type] = literal.substring(1, literal.length() - 1);
-        }
-        for (String keyword : KEYWORDS.keySet()) {
-            // advance() looks a name up only when it could be a keyword: two or more of the letters a to z.
-            if (!keyword.matches("[a-z][a-z]+")) throw new IllegalStateException("a keyword of another shape: " + keyword);
         }
     }
 
@@ -82,13 +76,6 @@ final class DirectParser {
         this.maxDepth = maxDepth;
         this.maxTermSize = maxTermSize;
         this.formula = new FormulaAssembler(maxDepth);
-        in.tagNames(DirectParser::nameType);
-    }
-
-    /** The token type of a name: its keyword's, or IDENT. Only names of two or more letters a to z can be keywords. */
-    private static int nameType(String name, boolean lowerCase) {
-        Integer keyword = lowerCase && name.length() > 1 ? KEYWORDS.get(name) : null;
-        return keyword == null ? AssayLexer.IDENT : keyword;
     }
 
     int line() {
@@ -629,7 +616,7 @@ final class DirectParser {
         if ((c >= 'a' && c <= 'z') || (c >= 'A' && c <= 'Z') || c == '_') {
             text = in.consumeName();
             column += text.length();
-            type = in.nameTag;
+            type = in.nameType;
             return;
         }
         if (c >= '0' && c <= '9') {

@@ -50,6 +50,10 @@ final class FastLexer implements TokenSource {
         for (String w : new String[] {"forall", "exists", "not", "and", "or", "implies", "iff", "true", "false"}) {
             KEYWORDS.put(w, typeOf(w.toUpperCase()));
         }
+        for (String keyword : KEYWORDS.keySet()) {
+            // nameType looks a name up only when it could be a keyword: two or more of the letters a to z.
+            if (!keyword.matches("[a-z][a-z]+")) throw new IllegalStateException("a keyword of another shape: " + keyword);
+        }
         SINGLE['('] = AssayLexer.LPAREN;
         SINGLE[','] = AssayLexer.COMMA;
         SINGLE[')'] = AssayLexer.RPAREN;
@@ -72,6 +76,12 @@ final class FastLexer implements TokenSource {
         SINGLE['\u22a5'] = AssayLexer.FALSE;
         SINGLE['\u2260'] = AssayLexer.NEQ;
         SINGLE['\u21a6'] = AssayLexer.ASSIGN;
+    }
+
+    /** The token type of a name: its keyword's, or IDENT. Only names of two or more letters a to z can be keywords. */
+    static int nameType(String name, boolean lowerCase) {
+        Integer keyword = lowerCase && name.length() > 1 ? KEYWORDS.get(name) : null;
+        return keyword == null ? AssayLexer.IDENT : keyword;
     }
 
     private static int typeOf(String symbolic) {
@@ -143,14 +153,9 @@ final class FastLexer implements TokenSource {
             return 0;
         }
         if (isNameStart(c)) {
-            int start = in.index();
-            do {
-                consume(c);
-                c = in.LA(1);
-            } while (isNameStart(c) || (c >= '0' && c <= '9'));
-            name = in.textOf(start, in.index() - 1);
-            Integer keyword = KEYWORDS.get(name);
-            return keyword == null ? AssayLexer.IDENT : keyword;
+            name = in.consumeName(); // a name has no line break: only the column moves
+            column += name.length();
+            return in.nameType;
         }
         if (c >= '0' && c <= '9') {
             do {

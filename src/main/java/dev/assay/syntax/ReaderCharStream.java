@@ -138,29 +138,14 @@ final class ReaderCharStream implements CharStream {
     String textOf(int from, int to) {
         int at = from - start;
         int length = Math.min(to, start + count - 1) - from + 1;
-        if (length <= 0) return "";
-        if (length > SHORT) return new String(data, at, length);
-        // Short names recur on every line (variables, constants, labels' stems): reuse the last string of the same
-        // characters instead of making a new one for each token.
-        int h = length;
-        for (int i = 0; i < length; i++) h = h * 31 + data[at + i];
-        int slot = (h ^ (h >>> 7)) & (recent.length - 1);
-        String r = recent[slot];
-        if (r != null && r.length() == length) {
-            boolean same = true;
-            for (int i = 0; same && i < length; i++) same = r.charAt(i) == data[at + i];
-            if (same) return r;
-        }
-        r = new String(data, at, length);
-        recent[slot] = r;
-        return r;
+        return length <= 0 ? "" : new String(data, at, length);
     }
 
     /**
-     * Consumes the characters of a name, {@code [A-Za-z0-9_]*} from here, and returns its text; {@link #nameTag} is
-     * then the tag of {@link #tagNames}'s tagger for it. For {@link DirectParser}, which tags keywords with their token
-     * type: one pass over the characters both finds the end and hashes them for the cache of recent names, and a
-     * name found there needs neither a new string nor a keyword lookup.
+     * Consumes the characters of a name, {@code [A-Za-z0-9_]*} from here, and returns its text; {@link #nameType} is
+     * then its token type ({@link FastLexer#nameType}). For both lexers: one pass over the characters both finds the
+     * end and hashes them for the cache of recent names (names recur on every line: variables, symbols, rule
+     * keywords), and a name found there needs neither a new string nor a keyword lookup.
      */
     String consumeName() {
         int length = 0;
@@ -190,22 +175,22 @@ final class ReaderCharStream implements CharStream {
         String text;
         if (length > SHORT_NAME) {
             text = new String(data, p, length);
-            nameTag = tagger.applyAsInt(text, lower);
+            nameType = FastLexer.nameType(text, lower);
         } else {
             int slot = (h ^ (h >>> 11) ^ (h >>> 22)) & (names.length - 1);
             int[] chars = nameChars[slot];
             if (nameHashes[slot] == h && chars != null && sameChars(chars, p, length)) {
                 text = names[slot];
-                nameTag = nameTags[slot];
+                nameType = nameTypes[slot];
             } else {
                 text = new String(data, p, length);
                 // Hashed here, on the reading thread when it reads ahead: the checker looks every name up by it.
                 text.hashCode();
-                nameTag = tagger.applyAsInt(text, lower);
+                nameType = FastLexer.nameType(text, lower);
                 names[slot] = text;
                 nameHashes[slot] = h;
                 nameChars[slot] = Arrays.copyOfRange(data, p, p + length);
-                nameTags[slot] = nameTag;
+                nameTypes[slot] = nameType;
             }
             p += length;
             return text;
@@ -214,20 +199,8 @@ final class ReaderCharStream implements CharStream {
         return text;
     }
 
-    /** What the tagger said of the name {@link #consumeName} returned last. */
-    int nameTag;
-
-    /** Tags a name, given whether it has only the letters a to z; the tag is cached with the name. */
-    interface NameTagger {
-        int applyAsInt(String name, boolean lowerCase);
-    }
-
-    private NameTagger tagger = (name, lowerCase) -> 0;
-
-    void tagNames(NameTagger tagger) {
-        this.tagger = tagger;
-        Arrays.fill(nameChars, null);
-    }
+    /** The token type of the name {@link #consumeName} returned last. */
+    int nameType;
 
     private static final int SHORT_NAME = 24;
     private boolean sameChars(int[] chars, int at, int length) {
@@ -243,16 +216,11 @@ final class ReaderCharStream implements CharStream {
         return true;
     }
 
-    /** The cache of recent names: text, hash and characters per slot. */
+    /** The cache of recent names: text, hash, characters and token type per slot. */
     private final String[] names = new String[4096];
     private final int[] nameHashes = new int[4096];
     private final int[][] nameChars = new int[4096][];
-    private final int[] nameTags = new int[4096];
-
-
-    /** Texts up to this many characters are looked up in {@link #recent}. */
-    private static final int SHORT = 8;
-    private final String[] recent = new String[512];
+    private final int[] nameTypes = new int[4096];
 
     void close() throws IOException {
         reader.close();
