@@ -96,7 +96,7 @@ final class DirectParser {
     }
 
     /** Where the current token starts, once a statement has been read: the next statement or the end of the file. */
-    Location next() {
+    Location nextTokenAt() {
         return new Location(file, Math.max(1, tokenLine), tokenColumn + 1);
     }
 

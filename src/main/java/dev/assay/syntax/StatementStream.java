@@ -207,7 +207,7 @@ final class StatementStream<P extends Parser, S> {
     /** Where the stream is now: the next token, or where reading stopped. */
     Location here() {
         if (direct != null && tokens == null) {
-            return direct.next();
+            return direct.nextTokenAt();
         }
         if (tokens == null) {
             return new Location(file, 1, 1);
