@@ -4,6 +4,7 @@ import dev.assay.syntax.BigStack;
 import dev.assay.syntax.CertificateReader;
 import dev.assay.syntax.CertificateStatement;
 import dev.assay.syntax.InputError;
+import dev.assay.syntax.Step;
 
 import java.io.IOException;
 import java.io.InputStream;
@@ -30,13 +31,24 @@ abstract class CertificateSource implements AutoCloseable {
     /** The SHA-256 of the whole file, in hex; known once {@link #next} has returned null or thrown an InputError. */
     abstract String sha256();
 
+    /** The statement {@link #next} returned last, resolved ahead by a {@link Preparer}; null when it was not. */
+    Preparer.Prepared prepared() {
+        return null;
+    }
+
     @Override
     public abstract void close();
 
     static CertificateSource open(String file, Path path, int maxDepth, long maxTermSize, boolean readAhead)
             throws IOException {
+        return open(file, path, maxDepth, maxTermSize, readAhead, null);
+    }
+
+    /** With read-ahead, {@code preparer} (if not null) resolves clause steps on the reading thread. */
+    static CertificateSource open(String file, Path path, int maxDepth, long maxTermSize, boolean readAhead,
+                                  Preparer preparer) throws IOException {
         Direct direct = new Direct(file, path, maxDepth, maxTermSize);
-        return readAhead ? new Ahead(direct) : direct;
+        return readAhead ? new Ahead(direct, preparer) : direct;
     }
 
     /** Reads on the caller's thread. */
@@ -108,7 +120,8 @@ abstract class CertificateSource implements AutoCloseable {
      * Parses on a thread of its own, handing statements over in batches through a bounded queue, so memory holds at
      * most {@link #QUEUED} batches ahead of the checker. A batch ends at {@link #BATCH} statements or after about
      * {@link #BATCH_BYTES} of the file, so that long statements (deep terms, wide clauses) are not held by the
-     * thousand: the text read ahead stays within about QUEUED × BATCH_BYTES.
+     * thousand: the text read ahead stays within about QUEUED × BATCH_BYTES. A step the preparer resolved travels as
+     * its {@link Preparer.Prepared}.
      */
     static final class Ahead extends CertificateSource {
         static final int BATCH = 64;
@@ -124,9 +137,12 @@ abstract class CertificateSource implements AutoCloseable {
         private Object[] batch = new Object[0];
         private int next;
         private End end;
+        private Preparer.Prepared prepared;
         private volatile boolean closed;
+        private final Preparer preparer;
 
-        Ahead(Direct direct) {
+        Ahead(Direct direct, Preparer preparer) {
+            this.preparer = preparer;
             thread = new Thread(null, () -> produce(direct), "assay-reader", BigStack.STACK_BYTES);
             thread.setDaemon(true);
             thread.start();
@@ -149,7 +165,8 @@ abstract class CertificateSource implements AutoCloseable {
                 while (!closed) {
                     CertificateStatement s = direct.next();
                     if (s == null) break;
-                    out[n++] = s;
+                    Preparer.Prepared p = preparer != null && s instanceof Step st ? preparer.prepare(st) : null;
+                    out[n++] = p != null ? p : s;
                     if (n == BATCH || direct.consumed - mark >= BATCH_BYTES) {
                         queue.put(n == BATCH ? out : java.util.Arrays.copyOf(out, n));
                         out = new Object[BATCH];
@@ -181,8 +198,14 @@ abstract class CertificateSource implements AutoCloseable {
                     Object o = batch[next++];
                     if (o instanceof End e) {
                         end = e;
+                        prepared = null;
                         return rethrow();
                     }
+                    if (o instanceof Preparer.Prepared p) {
+                        prepared = p;
+                        return p.step();
+                    }
+                    prepared = null;
                     return (CertificateStatement) o;
                 }
                 batch = queue.take();
@@ -203,6 +226,11 @@ abstract class CertificateSource implements AutoCloseable {
         @Override
         String sha256() {
             return end == null ? null : end.sha();
+        }
+
+        @Override
+        Preparer.Prepared prepared() {
+            return prepared;
         }
 
         @Override
