@@ -159,25 +159,24 @@ abstract class CertificateSource implements AutoCloseable {
         private void produceAll(Direct direct) {
             Object[] out = new Object[BATCH];
             int n = 0;
-            long mark = 0;
             Throwable error = null;
             try {
                 while (!closed) {
-                    CertificateStatement s = direct.next();
-                    if (s == null) break;
-                    Preparer.Prepared p = preparer != null && s instanceof Step st ? preparer.prepare(st) : null;
-                    out[n++] = p != null ? p : s;
-                    if (n == BATCH || direct.consumed - mark >= BATCH_BYTES) {
-                        queue.put(n == BATCH ? out : java.util.Arrays.copyOf(out, n));
-                        out = new Object[BATCH];
-                        n = 0;
-                        mark = direct.consumed;
+                    long mark = direct.consumed;
+                    n = fill(direct, out, mark);
+                    if (n < 0) {
+                        n = -n - 1;
+                        break;
                     }
+                    queue.put(n == BATCH ? out : java.util.Arrays.copyOf(out, n));
+                    out = new Object[BATCH];
+                    n = 0;
                 }
             } catch (InterruptedException e) {
                 return;
             } catch (Throwable t) {
                 error = t;
+                n = filled;
             }
             if (closed) return;
             Object[] last = new Object[n + 1];
@@ -187,6 +186,27 @@ abstract class CertificateSource implements AutoCloseable {
                 queue.put(last);
             } catch (InterruptedException ignored) {
                 // Closed while handing over the end.
+            }
+        }
+
+        /** Statements in the batch being filled, for the batch that ends with an error. */
+        private int filled;
+
+        /**
+         * Fills {@code out} with statements until it holds {@link #BATCH} of them or {@link #BATCH_BYTES} of the file
+         * were read since {@code mark}, and returns how many; {@code -(n + 1)} for the last n at the end. A method of
+         * its own, like the checker's batches, so that the compiler compiles it whole rather than in place.
+         */
+        private int fill(Direct direct, Object[] out, long mark) throws InputError, IOException {
+            int n = 0;
+            filled = 0;
+            while (true) {
+                CertificateStatement s = direct.next();
+                if (s == null) return -(n + 1);
+                Preparer.Prepared p = preparer != null && s instanceof Step st ? preparer.prepare(st) : null;
+                out[n++] = p != null ? p : s;
+                filled = n;
+                if (n == BATCH || direct.consumed - mark >= BATCH_BYTES) return n;
             }
         }
 

@@ -319,19 +319,9 @@ public final class Checker {
             }
             try (source) {
                 // The reader enforces the order of the file (the header first and once, the digest right after it).
-                Location last = new Location(certificateFile, 1, 1);
-                CertificateStatement s;
-                while (true) {
-                    try {
-                        s = source.next();
-                    } catch (InputError e) {
-                        certificateSha = source.sha256();
-                        throw inputError(e);
-                    }
-                    if (s == null) break;
-                    last = s.at();
-                    prepared = source.prepared();
-                    statement(s);
+                last = new Location(certificateFile, 1, 1);
+                while (someStatements(source)) {
+                    // Batches keep the compiled form of this loop small (see someStatements).
                 }
                 certificateSha = source.sha256();
                 finish(last);
@@ -344,6 +334,33 @@ public final class Checker {
                 throw inputError(certificateFile, "cannot read the certificate file: " + describe(e));
             }
         }
+
+        /** Where the last statement read begins. */
+        private Location last;
+
+        /**
+         * Checks the next {@value #BATCH} statements, or fewer at the end; false once the certificate has ended. A
+         * method of its own so that the just-in-time compiler compiles it whole once, rather than compiling the loop
+         * of {@link #run} in place with everything it calls, twice over.
+         */
+        private boolean someStatements(CertificateSource source) throws Stop, IOException, InterruptedException {
+            for (int i = 0; i < BATCH; i++) {
+                CertificateStatement s;
+                try {
+                    s = source.next();
+                } catch (InputError e) {
+                    certificateSha = source.sha256();
+                    throw inputError(e);
+                }
+                if (s == null) return false;
+                last = s.at();
+                prepared = source.prepared();
+                statement(s);
+            }
+            return true;
+        }
+
+        private static final int BATCH = 16;
 
         private Stop stopped() {
             return new Stop(Verdict.TIMEOUT, new Failure(certificateFile, 1, 1, null, null,
