@@ -28,8 +28,43 @@ class BookkeepingTest {
         for (String l : ref) assertTrue(t.mayContain(l), l);
         int falseHits = 0;
         for (int i = 0; i < 200_000; i++) if (t.mayContain("t" + i)) falseHits++;
-        assertEquals(0, falseHits, "64-bit fingerprints of 200,000 labels should not meet by chance");
+        assertEquals(0, falseHits, "64-bit keys of 200,000 labels should not meet by chance");
         assertFalse(t.mayContain("s"));
+    }
+
+    @Test
+    void numberedLabelsShareWordsButNotBits() {
+        LabelTable t = new LabelTable();
+        for (int i = 0; i < 100_000; i += 2) assertTrue(t.add("s" + i));
+        assertEquals(50_000, t.size());
+        for (int i = 0; i < 100_000; i++) assertEquals(i % 2 == 0, t.mayContain("s" + i), "s" + i);
+        assertFalse(t.add("s42"), "added twice");
+        // The digits are part of the stem's key: leading zeros, and the same number under another stem, differ.
+        assertFalse(t.mayContain("s042"));
+        assertFalse(t.mayContain("s0042"));
+        assertFalse(t.mayContain("c42"));
+        assertFalse(t.mayContain("s42_"));
+        assertFalse(t.mayContain("s"));
+        // Numbers 0–99,999 span 1,563 words of 64; one more for each digit count where a word is split.
+        assertTrue(t.words() <= 100_000 / 64 + 5, "50,000 numbered labels in " + t.words() + " words");
+    }
+
+    @Test
+    void labelsWithoutDigitsOrWithVeryLongOnesAreStemsOfTheirOwn() {
+        LabelTable t = new LabelTable();
+        String nineteen = "x1234567890123456789";
+        assertTrue(t.add(nineteen));
+        assertTrue(t.mayContain(nineteen));
+        assertFalse(t.mayContain("x1234567890123456788"));
+        assertEquals(0, LabelTable.number(nineteen));
+        assertEquals(123456789012345678L, LabelTable.number("x123456789012345678"));
+        assertTrue(t.add("goal_clause"));
+        assertTrue(t.mayContain("goal_clause"));
+        assertFalse(t.mayContain("goal_claus"));
+        assertTrue(t.add("7"));
+        assertTrue(t.mayContain("7"));
+        assertFalse(t.mayContain("07"));
+        assertEquals(3, t.size());
     }
 
     @Test
