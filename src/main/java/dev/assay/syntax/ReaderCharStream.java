@@ -4,6 +4,7 @@ import java.io.IOException;
 import java.io.Reader;
 import java.io.UncheckedIOException;
 import java.nio.charset.CharacterCodingException;
+import java.nio.charset.StandardCharsets;
 import java.util.Arrays;
 import org.antlr.v4.runtime.CharStream;
 import org.antlr.v4.runtime.IntStream;
@@ -43,7 +44,11 @@ final class ReaderCharStream implements CharStream {
     ReaderCharStream(String file, Reader reader) {
         this.file = file;
         this.reader = reader;
+        this.ascii = reader instanceof Utf8 u ? u : null;
     }
+
+    /** The reader, when it can hand out ASCII text as code points directly. */
+    private final Utf8 ascii;
 
     @Override
     public int LA(int i) {
@@ -150,21 +155,20 @@ final class ReaderCharStream implements CharStream {
     String consumeName() {
         int length = 0;
         int h = 0;
-        boolean lower = true;
+        int kinds = 0;
+        byte[] table = NAME_CHARS;
         while (true) {
             int[] d = data;
             int i = p + length;
             int end = count;
             while (i < end) {
                 int c = d[i];
-                if (c >= 'a' && c <= 'z') {
-                    h = 31 * h + c;
-                } else if ((c >= 'A' && c <= 'Z') || c == '_' || (c >= '0' && c <= '9')) {
-                    h = 31 * h + c;
-                    lower = false;
-                } else {
+                int k;
+                if (c >= 128 || (k = table[c]) == 0) {
                     break;
                 }
+                h = 31 * h + c;
+                kinds |= k;
                 i++;
             }
             length = i - p;
@@ -172,38 +176,68 @@ final class ReaderCharStream implements CharStream {
                 break;
             }
         }
+        boolean lower = kinds <= LOWER;
         String text;
         if (length > SHORT_NAME) {
-            text = new String(data, p, length);
+            text = latin1(p, length);
             nameType = FastLexer.nameType(text, lower);
         } else {
             int slot = (h ^ (h >>> 11) ^ (h >>> 22)) & (names.length - 1);
-            int[] chars = nameChars[slot];
+            byte[] chars = nameChars[slot];
             if (nameHashes[slot] == h && chars != null && sameChars(chars, p, length)) {
                 text = names[slot];
                 nameType = nameTypes[slot];
             } else {
-                text = new String(data, p, length);
+                byte[] copy = new byte[length];
+                int[] d = data;
+                for (int i = 0; i < length; i++) {
+                    copy[i] = (byte) d[p + i];
+                }
+                text = new String(copy, StandardCharsets.ISO_8859_1);
                 // Hashed here, on the reading thread when it reads ahead: the checker looks every name up by it.
                 text.hashCode();
                 nameType = FastLexer.nameType(text, lower);
                 names[slot] = text;
                 nameHashes[slot] = h;
-                nameChars[slot] = Arrays.copyOfRange(data, p, p + length);
+                nameChars[slot] = copy;
                 nameTypes[slot] = nameType;
             }
-            p += length;
-            return text;
         }
         p += length;
         return text;
+    }
+
+    /** The text of {@code length} name characters (all ASCII) from window index {@code at}. */
+    private String latin1(int at, int length) {
+        byte[] b = new byte[length];
+        for (int i = 0; i < length; i++) {
+            b[i] = (byte) data[at + i];
+        }
+        return new String(b, StandardCharsets.ISO_8859_1);
     }
 
     /** The token type of the name {@link #consumeName} returned last. */
     int nameType;
 
     private static final int SHORT_NAME = 24;
-    private boolean sameChars(int[] chars, int at, int length) {
+    /** The characters of a name: 1 for a lower-case letter, 2 for the others ({@code [A-Z0-9_]}), 0 for the rest. */
+    private static final byte LOWER = 1;
+    private static final byte[] NAME_CHARS = new byte[128];
+
+    static {
+        for (int c = 'a'; c <= 'z'; c++) {
+            NAME_CHARS[c] = LOWER;
+        }
+        for (int c = 'A'; c <= 'Z'; c++) {
+            NAME_CHARS[c] = 2;
+        }
+        for (int c = '0'; c <= '9'; c++) {
+            NAME_CHARS[c] = 2;
+        }
+        NAME_CHARS['_'] = 2;
+    }
+
+    private boolean sameChars(byte[] chars, int at, int length) {
         if (chars.length != length) {
             return false;
         }
@@ -219,7 +253,7 @@ final class ReaderCharStream implements CharStream {
     /** The cache of recent names: text, hash, characters and token type per slot. */
     private final String[] names = new String[4096];
     private final int[] nameHashes = new int[4096];
-    private final int[][] nameChars = new int[4096][];
+    private final byte[][] nameChars = new byte[4096][];
     private final int[] nameTypes = new int[4096];
 
     void close() throws IOException {
@@ -240,6 +274,20 @@ final class ReaderCharStream implements CharStream {
         }
         if (data.length - count < BLOCK + 1) {
             data = Arrays.copyOf(data, Math.max(2 * data.length, count + BLOCK + 1));
+        }
+        if (ascii != null && pendingHigh < 0) {
+            int n = readAscii();
+            if (n > 0) {
+                int[] d = data;
+                for (int i = count; i < count + n; i++) {
+                    if (d[i] == '\n') {
+                        line++;
+                        lineStart = start + i + 1;
+                    }
+                }
+                count += n;
+                return true;
+            }
         }
         int read;
         do {
@@ -287,6 +335,14 @@ final class ReaderCharStream implements CharStream {
         }
         count = n;
         return count > added || fill();
+    }
+
+    private int readAscii() {
+        try {
+            return ascii.readAscii(data, count, BLOCK);
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
     }
 
     private int read() {

@@ -77,6 +77,37 @@ final class Utf8 extends Reader {
         return out.position() - offset;
     }
 
+    /**
+     * Copies the ASCII bytes that come next, up to {@code length}, into {@code out} as code points, and returns how
+     * many; 0 when the next byte is not ASCII, an error is pending or the input has ended, in which case
+     * {@link #read(char[], int, int)} takes over. The fast path for text that is ASCII, which most files are: an ASCII
+     * byte is always a whole UTF-8 character, so nothing the decoder holds is skipped.
+     */
+    int readAscii(int[] out, int offset, int length) throws IOException {
+        if (error != null || flushed) {
+            return 0;
+        }
+        if (!endOfBytes && bytes.remaining() < 4) {
+            bytes.compact();
+            int n = in.read(bytes.array(), bytes.position(), bytes.remaining());
+            if (n < 0) {
+                endOfBytes = true;
+            } else {
+                bytes.position(bytes.position() + n);
+            }
+            bytes.flip();
+        }
+        byte[] b = bytes.array();
+        int at = bytes.position();
+        int end = Math.min(bytes.limit(), at + length);
+        int i = at;
+        while (i < end && b[i] >= 0) {
+            out[offset++] = b[i++];
+        }
+        bytes.position(i);
+        return i - at;
+    }
+
     @Override
     public void close() throws IOException {
         in.close();
