@@ -105,6 +105,26 @@ class VariantsTest {
     }
 
     @Test
+    void wideClausesEqualAsSetsAreVariantsWithoutSearch() {
+        // Twenty literals of one shape, the second clause in reverse order: equal as sets, so the identity renaming
+        // pairs them, even with no budget for a search; one variable changed, and they are not variants.
+        StringBuilder forward = new StringBuilder();
+        StringBuilder backward = new StringBuilder();
+        StringBuilder changed = new StringBuilder();
+        for (int i = 0; i < 20; i++) {
+            String lit = "P(x" + i + ", x" + (i + 1) + ")";
+            forward.append(i == 0 ? "" : " or ").append(lit);
+            backward.insert(0, lit + (i == 0 ? "" : " or "));
+            changed.insert(0, (i == 7 ? "P(x7, x9)" : lit) + (i == 0 ? "" : " or "));
+        }
+        Clause a = k.clause(forward.toString());
+        assertTrue(Variants.areVariants(a, k.clause(backward.toString()), 0));
+        assertTrue(Variants.areVariants(k.clause(backward.toString()), a, 0));
+        assertFalse(Variants.areVariants(a, k.clause(changed.toString()), Variants.DEFAULT_BUDGET));
+        assertFalse(Variants.areVariants(k.clause(changed.toString()), a, Variants.DEFAULT_BUDGET));
+    }
+
+    @Test
     void manyLiteralsOfOneShapeFinishQuickly() {
         // A chain P(x0, x1), P(x1, x2), … stated in reverse order with other names: every literal is a candidate for
         // every other, so the pairing is found by the search, not by the skeleton.
