@@ -30,6 +30,10 @@ public final class Kernel {
     private final Substitution none;
     private final Signature signature;
     private final Map<String, Fact> axioms = new LinkedHashMap<>();
+    /** The last clause {@link #renameApart} renamed, the variables it was kept apart from, and the result. */
+    private Clause apartFrom;
+    private List<Variable> apartOf;
+    private Clause apart;
 
     public Kernel(Problem problem, TermFactory terms) {
         this.problem = problem;
@@ -734,6 +738,8 @@ public final class Kernel {
         List<Variable> own = b.variables();
         List<Variable> theirs = a.variables();
         if (own.isEmpty() || theirs.isEmpty()) return b;
+        // Long certificates resolve with one clause again and again, against clauses with the same variables.
+        if (b == apartFrom && theirs.equals(apartOf)) return apart;
         Set<Variable> inA = theirs.size() > 8 ? new HashSet<>(theirs) : null;
         Set<Variable> taken = null;
         LinkedHashMap<Variable, Term> renaming = null;
@@ -753,7 +759,10 @@ public final class Kernel {
                 }
             }
         }
-        return renaming == null ? b : Substitution.owning(terms, renaming).apply(b);
+        apartFrom = b;
+        apartOf = theirs;
+        apart = renaming == null ? b : Substitution.owning(terms, renaming).apply(b);
+        return apart;
     }
 
     private static String withoutTrailingDigits(String name) {
