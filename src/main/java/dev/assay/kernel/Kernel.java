@@ -317,10 +317,8 @@ public final class Kernel {
         }
         Clause bApart = renameApart(b.clause(), a.clause());
         Literal ljApart = bApart.literal(j);
-        Clause restA = remove(a.clause(), li);
-        Clause restB = remove(bApart, ljApart);
-        return unifyThenCompare(rule, label, stated, atomPairs(li, ljApart),
-                mgu -> union(mgu.apply(restA), mgu.apply(restB)),
+        Clause rest = remove(a.clause(), li, bApart, ljApart);
+        return unifyThenCompare(rule, label, stated, atomPairs(li, ljApart), mgu -> mgu.apply(rest),
                 () -> "the atoms of " + ref(a, i) + " and " + ref(b, j) + ", " + Printer.term(li.atom()) + " and "
                         + Printer.term(lj.atom()) + ", do not unify: ");
     }
@@ -428,8 +426,7 @@ public final class Kernel {
         Substitution mgu = ((Unification.Unified) r).unifier();
         Literal rewritten = new Literal(targetApart.positive(),
                 (Application) Positions.replace(terms, targetApart.atom(), position, to));
-        Clause derived = mgu.apply(union(union(remove(a.clause(), eq), remove(bApart, targetApart)),
-                new Clause(List.of(rewritten))));
+        Clause derived = mgu.apply(union(remove(a.clause(), eq, bApart, targetApart), new Clause(List.of(rewritten))));
         if (Variants.areVariants(stated, derived, Variants.DEFAULT_BUDGET)) return accept(label, stated);
         return notVariant(rule, stated, derived);
     }
@@ -688,6 +685,14 @@ public final class Kernel {
     private static Clause remove(Clause c, Literal l) {
         List<Literal> out = new ArrayList<>(c.width());
         for (Literal x : c.literals()) if (!x.equals(l)) out.add(x);
+        return new Clause(out);
+    }
+
+    /** {@code x} without {@code lx}, then {@code y} without {@code ly}, as one clause. */
+    private static Clause remove(Clause x, Literal lx, Clause y, Literal ly) {
+        List<Literal> out = new ArrayList<>(x.width() + y.width());
+        for (Literal l : x.literals()) if (!l.equals(lx)) out.add(l);
+        for (Literal l : y.literals()) if (!l.equals(ly)) out.add(l);
         return new Clause(out);
     }
 
