@@ -30,6 +30,10 @@ public final class Kernel {
     private final Substitution none;
     private final Signature signature;
     private final Map<String, Fact> axioms = new LinkedHashMap<>();
+    /** The last clause {@link #renameApart} renamed, the variables it was kept apart from, and the result. */
+    private Clause apartFrom;
+    private List<Variable> apartOf;
+    private Clause apart;
 
     public Kernel(Problem problem, TermFactory terms) {
         this.problem = problem;
@@ -313,10 +317,8 @@ public final class Kernel {
         }
         Clause bApart = renameApart(b.clause(), a.clause());
         Literal ljApart = bApart.literal(j);
-        Clause restA = remove(a.clause(), li);
-        Clause restB = remove(bApart, ljApart);
-        return unifyThenCompare(rule, label, stated, atomPairs(li, ljApart),
-                mgu -> union(mgu.apply(restA), mgu.apply(restB)),
+        Clause rest = remove(a.clause(), li, bApart, ljApart);
+        return unifyThenCompare(rule, label, stated, atomPairs(li, ljApart), mgu -> mgu.apply(rest),
                 () -> "the atoms of " + ref(a, i) + " and " + ref(b, j) + ", " + Printer.term(li.atom()) + " and "
                         + Printer.term(lj.atom()) + ", do not unify: ");
     }
@@ -424,8 +426,7 @@ public final class Kernel {
         Substitution mgu = ((Unification.Unified) r).unifier();
         Literal rewritten = new Literal(targetApart.positive(),
                 (Application) Positions.replace(terms, targetApart.atom(), position, to));
-        Clause derived = mgu.apply(union(union(remove(a.clause(), eq), remove(bApart, targetApart)),
-                new Clause(List.of(rewritten))));
+        Clause derived = mgu.apply(union(remove(a.clause(), eq, bApart, targetApart), new Clause(List.of(rewritten))));
         if (Variants.areVariants(stated, derived, Variants.DEFAULT_BUDGET)) return accept(label, stated);
         return notVariant(rule, stated, derived);
     }
@@ -687,6 +688,14 @@ public final class Kernel {
         return new Clause(out);
     }
 
+    /** {@code x} without {@code lx}, then {@code y} without {@code ly}, as one clause. */
+    private static Clause remove(Clause x, Literal lx, Clause y, Literal ly) {
+        List<Literal> out = new ArrayList<>(x.width() + y.width());
+        for (Literal l : x.literals()) if (!l.equals(lx)) out.add(l);
+        for (Literal l : y.literals()) if (!l.equals(ly)) out.add(l);
+        return new Clause(out);
+    }
+
     private static Clause union(Clause x, Clause y) {
         List<Literal> out = new ArrayList<>(x.literals());
         out.addAll(y.literals());
@@ -734,6 +743,8 @@ public final class Kernel {
         List<Variable> own = b.variables();
         List<Variable> theirs = a.variables();
         if (own.isEmpty() || theirs.isEmpty()) return b;
+        // Long certificates resolve with one clause again and again, against clauses with the same variables.
+        if (b == apartFrom && theirs.equals(apartOf)) return apart;
         Set<Variable> inA = theirs.size() > 8 ? new HashSet<>(theirs) : null;
         Set<Variable> taken = null;
         LinkedHashMap<Variable, Term> renaming = null;
@@ -753,7 +764,10 @@ public final class Kernel {
                 }
             }
         }
-        return renaming == null ? b : Substitution.owning(terms, renaming).apply(b);
+        apartFrom = b;
+        apartOf = theirs;
+        apart = renaming == null ? b : Substitution.owning(terms, renaming).apply(b);
+        return apart;
     }
 
     private static String withoutTrailingDigits(String name) {

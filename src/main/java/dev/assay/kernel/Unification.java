@@ -64,6 +64,8 @@ public final class Unification {
 
     /** A most general unifier of {@code left} and {@code right}. Positions in failures count from their arguments. */
     public static Result mostGeneralUnifier(TermFactory terms, Term left, Term right) {
+        Substitution small = smallUnifier(terms, left, right);
+        if (small != null) return new Unified(small);
         List<Term[]> pairs = new ArrayList<>();
         pairs.add(new Term[] {left, right});
         return mostGeneralUnifier(terms, pairs);
@@ -72,6 +74,152 @@ public final class Unification {
     /** A most general simultaneous unifier of every pair. */
     public static Result mostGeneralUnifier(TermFactory terms, List<Term[]> pairs) {
         return new Solver(terms).solve(pairs);
+    }
+
+    /**
+     * The Solver's unifier of a pair of at most {@link Small#NODES} nodes and {@link Small#VARIABLES} variables, or
+     * null when the pair is larger, has no unifier, or is one the small path leaves to the Solver.
+     */
+    static Substitution smallUnifier(TermFactory terms, Term left, Term right) {
+        if (left.treeSize() > Small.NODES || right.treeSize() > Small.NODES - left.treeSize()) return null;
+        return new Small(terms).unify(left, right);
+    }
+
+    /**
+     * Robinson's algorithm (Robinson 1965, section 5) on a triangular substitution held in small arrays, for pairs
+     * where the Solver's tables cost more than the work. It returns the Solver's
+     * own unifier, not one equal up to renaming: it meets the goals in the Solver's order, binds a variable to a
+     * variable by the Solver's rank rule, and unifies the arguments of the same two applications as the Solver. That
+     * holds while every class of the Solver has at most two applications; where a third would join (an application
+     * meeting another after it met its partner) it gives up, as it does on a clash or a cycle, and the Solver decides
+     * and words the failure. Its recursion passes through at most {@link #VARIABLES} bindings, each at most
+     * {@link #NODES} deep.
+     */
+    private static final class Small {
+        static final int NODES = 64;
+        static final int VARIABLES = 16;
+        private final TermFactory terms;
+        private Variable[] vars;
+        private Term[] bound;
+        private int[] rank;
+        /** Pairs of applications whose arguments were unified; each application is in at most one. */
+        private Term[] met;
+        private int metCount;
+
+        Small(TermFactory terms) {
+            this.terms = terms;
+        }
+
+        Substitution unify(Term left, Term right) {
+            vars = Terms.variablesOf(List.of(left, right)).toArray(new Variable[0]);
+            if (vars.length > VARIABLES) return null;
+            bound = new Term[vars.length];
+            rank = new int[vars.length];
+            // Each application is taken apart at most once, with one partner: one goal is pushed for every two
+            // argument nodes, so a pair of n nodes never has more than n / 2 goals.
+            int n = (int) (left.treeSize() + right.treeSize());
+            met = new Term[n];
+            Term[] goals = new Term[n + 2];
+            int top = 0;
+            goals[top++] = left;
+            goals[top++] = right;
+            while (top > 0) {
+                Term r = goals[--top];
+                Term l = goals[--top];
+                if (l == r) continue;
+                Term wl = walk(l);
+                Term wr = walk(r);
+                if (wl == wr) continue;
+                if (wl instanceof Application al && wr instanceof Application ar) {
+                    if (!al.symbol().equals(ar.symbol())) return null;
+                    int seen = metBefore(al, ar);
+                    if (seen > 0) continue;
+                    if (seen < 0) return null;
+                    met[metCount++] = al;
+                    met[metCount++] = ar;
+                    for (int i = al.arity() - 1; i >= 0; i--) {
+                        goals[top++] = al.argument(i);
+                        goals[top++] = ar.argument(i);
+                    }
+                } else if (wl instanceof Variable vl && wr instanceof Variable vr) {
+                    int i = index(vl);
+                    int j = index(vr);
+                    // The Solver's union by rank: the left root stays on top unless the right one ranks higher.
+                    if (rank[i] >= rank[j]) {
+                        bound[j] = vl;
+                        if (rank[i] == rank[j]) rank[i]++;
+                    } else {
+                        bound[i] = vr;
+                    }
+                } else if (wl instanceof Variable vl) {
+                    bound[index(vl)] = wr;
+                } else {
+                    bound[index((Variable) wr)] = wl;
+                }
+            }
+            return build();
+        }
+
+        /** 1 when {@code a} and {@code b} were unified with each other, -1 when either with another, else 0. */
+        private int metBefore(Term a, Term b) {
+            for (int k = 0; k < metCount; k++) {
+                if (met[k] == a || met[k] == b) return met[k ^ 1] == (met[k] == a ? b : a) ? 1 : -1;
+            }
+            return 0;
+        }
+
+        private int index(Variable v) {
+            int i = 0;
+            while (vars[i] != v) i++;
+            return i;
+        }
+
+        /** The unbound variable or the application that {@code t} stands for under the bindings so far. */
+        private Term walk(Term t) {
+            while (t instanceof Variable v) {
+                Term b = bound[index(v)];
+                if (b == null) return v;
+                t = b;
+            }
+            return t;
+        }
+
+        /** The Solver's solved form: each variable that changes, in order, to its fully resolved term. */
+        private Substitution build() {
+            Term[] solved = new Term[vars.length];
+            boolean[] open = new boolean[vars.length];
+            LinkedHashMap<Variable, Term> out = new LinkedHashMap<>();
+            for (int i = 0; i < vars.length; i++) {
+                Term value = resolve(vars[i], solved, open);
+                if (value == null) return null;
+                if (value != vars[i]) out.put(vars[i], value);
+            }
+            return Substitution.owning(terms, out);
+        }
+
+        /** {@code t} with every bound variable resolved, or null when a variable would contain itself. */
+        private Term resolve(Term t, Term[] solved, boolean[] open) {
+            if (t.isGround()) return t;
+            if (t instanceof Variable v) {
+                int i = index(v);
+                if (solved[i] != null || bound[i] == null) return solved[i] != null ? solved[i] : v;
+                if (open[i]) return null;
+                open[i] = true;
+                return solved[i] = resolve(bound[i], solved, open);
+            }
+            Application a = (Application) t;
+            Term[] args = a.argumentArray();
+            Term[] mapped = null;
+            for (int k = 0; k < args.length; k++) {
+                Term m = resolve(args[k], solved, open);
+                if (m == null) return null;
+                if (m != args[k]) {
+                    if (mapped == null) mapped = args.clone();
+                    mapped[k] = m;
+                }
+            }
+            return mapped == null ? a : terms.application(a.symbol(), mapped);
+        }
     }
 
     private static final class Solver {

@@ -182,6 +182,20 @@ class KernelMutationKillTest extends RuleTestSupport {
     }
 
     @Test
+    void renamingApartTheSameClauseAgainstOthersInTurn() {
+        // The kernel keeps the last renaming; it may serve only a clause with the same variables.
+        Clause b = k.clause("[x, y] P(x) or Q(y)");
+        Clause first = kernel.renameApart(b, k.clause("[x] Q(x)"));
+        assertEquals("[x1, y] P(x1) or Q(y)", Printer.clause(first));
+        assertSame(first, kernel.renameApart(b, k.clause("[x] P(f(x))")));
+        assertEquals("[x, y1] P(x) or Q(y1)", Printer.clause(kernel.renameApart(b, k.clause("[y] Q(y)"))));
+        assertEquals("[x1, y1] P(x1) or Q(y1)", Printer.clause(kernel.renameApart(b, k.clause("[y, x] Q(y) or P(x)"))));
+        assertEquals("[x1, y1] P(x1) or Q(y1)", Printer.clause(kernel.renameApart(b, k.clause("[x, y] Q(y) or P(x)"))));
+        assertEquals("[x1] Q(x1)", Printer.clause(kernel.renameApart(k.clause("[x] Q(x)"), k.clause("[x] Q(x)"))));
+        assertEquals("[x1, y] P(x1) or Q(y)", Printer.clause(kernel.renameApart(b, k.clause("[x] Q(x)"))));
+    }
+
+    @Test
     void renamingApartAgainstAWideClause() {
         // More than eight variables in A: membership is looked up in a set.
         List<Literal> wide = new ArrayList<>();
