@@ -82,7 +82,10 @@ public final class Unification {
      */
     static Substitution smallUnifier(TermFactory terms, Term left, Term right) {
         if (left.treeSize() > Small.NODES || right.treeSize() > Small.NODES - left.treeSize()) return null;
-        return new Small(terms).unify(left, right);
+        Substitution s = new Small(terms).unify(left, right);
+        // A unifier by construction, and checked all the same, since the kernel builds its conclusions on it: one
+        // that did not make the two terms equal would be left to the Solver.
+        return s != null && s.apply(left) == s.apply(right) ? s : null;
     }
 
     /**
