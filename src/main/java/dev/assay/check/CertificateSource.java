@@ -4,7 +4,6 @@ import dev.assay.syntax.BigStack;
 import dev.assay.syntax.CertificateReader;
 import dev.assay.syntax.CertificateStatement;
 import dev.assay.syntax.InputError;
-import dev.assay.syntax.Step;
 
 import java.io.IOException;
 import java.io.InputStream;
@@ -31,24 +30,13 @@ abstract class CertificateSource implements AutoCloseable {
     /** The SHA-256 of the whole file, in hex; known once {@link #next} has returned null or thrown an InputError. */
     abstract String sha256();
 
-    /** The statement {@link #next} returned last, resolved ahead by a {@link Preparer}; null when it was not. */
-    Preparer.Prepared prepared() {
-        return null;
-    }
-
     @Override
     public abstract void close();
 
     static CertificateSource open(String file, Path path, int maxDepth, long maxTermSize, boolean readAhead)
             throws IOException {
-        return open(file, path, maxDepth, maxTermSize, readAhead, null);
-    }
-
-    /** With read-ahead, {@code preparer} (if not null) resolves clause steps on the reading thread. */
-    static CertificateSource open(String file, Path path, int maxDepth, long maxTermSize, boolean readAhead,
-                                  Preparer preparer) throws IOException {
         Direct direct = new Direct(file, path, maxDepth, maxTermSize);
-        return readAhead ? new Ahead(direct, preparer) : direct;
+        return readAhead ? new Ahead(direct) : direct;
     }
 
     /** Reads on the caller's thread. */
@@ -120,8 +108,7 @@ abstract class CertificateSource implements AutoCloseable {
      * Parses on a thread of its own, handing statements over in batches through a bounded queue, so memory holds at
      * most {@link #QUEUED} batches ahead of the checker. A batch ends at {@link #BATCH} statements or after about
      * {@link #BATCH_BYTES} of the file, so that long statements (deep terms, wide clauses) are not held by the
-     * thousand: the text read ahead stays within about QUEUED × BATCH_BYTES. A step the preparer resolved travels as
-     * its {@link Preparer.Prepared}.
+     * thousand: the text read ahead stays within about QUEUED × BATCH_BYTES.
      */
     static final class Ahead extends CertificateSource {
         static final int BATCH = 64;
@@ -137,12 +124,9 @@ abstract class CertificateSource implements AutoCloseable {
         private Object[] batch = new Object[0];
         private int next;
         private End end;
-        private Preparer.Prepared prepared;
         private volatile boolean closed;
-        private final Preparer preparer;
 
-        Ahead(Direct direct, Preparer preparer) {
-            this.preparer = preparer;
+        Ahead(Direct direct) {
             thread = new Thread(null, () -> produce(direct), "assay-reader", BigStack.STACK_BYTES);
             thread.setDaemon(true);
             thread.start();
@@ -203,8 +187,7 @@ abstract class CertificateSource implements AutoCloseable {
             while (true) {
                 CertificateStatement s = direct.next();
                 if (s == null) return -(n + 1);
-                Preparer.Prepared p = preparer != null && s instanceof Step st ? preparer.prepare(st) : null;
-                out[n++] = p != null ? p : s;
+                out[n++] = s;
                 filled = n;
                 if (n == BATCH || direct.consumed - mark >= BATCH_BYTES) return n;
             }
@@ -218,14 +201,8 @@ abstract class CertificateSource implements AutoCloseable {
                     Object o = batch[next++];
                     if (o instanceof End e) {
                         end = e;
-                        prepared = null;
                         return rethrow();
                     }
-                    if (o instanceof Preparer.Prepared p) {
-                        prepared = p;
-                        return p.step();
-                    }
-                    prepared = null;
                     return (CertificateStatement) o;
                 }
                 batch = queue.take();
@@ -246,11 +223,6 @@ abstract class CertificateSource implements AutoCloseable {
         @Override
         String sha256() {
             return end == null ? null : end.sha();
-        }
-
-        @Override
-        Preparer.Prepared prepared() {
-            return prepared;
         }
 
         @Override

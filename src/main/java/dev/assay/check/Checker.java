@@ -264,9 +264,6 @@ public final class Checker {
         boolean goalUsed;
         int coneSize;
         ProofGraph.Cone cone;
-        /** The statement being checked resolved ahead, or null; used only while {@link #usePrepared} is set. */
-        Preparer.Prepared prepared;
-        boolean usePrepared;
         /** The statement being checked, and the certificate file (read again only to locate a forgotten label). */
         Location current;
         Path certificatePath;
@@ -311,9 +308,8 @@ public final class Checker {
             CertificateSource source;
             try {
                 sizeLimit(certificateFile, certificatePath, "certificate");
-                boolean ahead = options.threads() > 1;
                 source = CertificateSource.open(certificateFile, certificatePath, options.maxDepth(),
-                        options.maxTermSize(), ahead, ahead ? new Preparer(terms, kernel.signature()) : null);
+                        options.maxTermSize(), options.threads() > 1);
             } catch (IOException e) {
                 throw inputError(certificateFile, "cannot read the certificate file: " + describe(e));
             }
@@ -354,7 +350,6 @@ public final class Checker {
                 }
                 if (s == null) return false;
                 last = s.at();
-                prepared = source.prepared();
                 statement(s);
             }
             return true;
@@ -453,7 +448,6 @@ public final class Checker {
                         + (label.equals(problem.goalName()) ? "goal" : "axiom"));
             }
             premiseCount = 0;
-            usePrepared = false;
             if (premiseNames != null) premiseNames.clear();
             Outcome o;
             try {
@@ -518,7 +512,7 @@ public final class Checker {
             if (args instanceof ClausifyArgs a) {
                 Fact p = premise(a.premise(), label, rule, premises);
                 Clause c = clause(s, sig);
-                return kernel.clausify(label, p, subst(0, a.theta(), sig, c), c);
+                return kernel.clausify(label, p, subst(a.theta(), sig, c), c);
             }
             if (args instanceof DefineArgs a) {
                 RawFormula raw = rawFormula(s);
@@ -536,18 +530,18 @@ public final class Checker {
                 Fact x = premise(a.left().label(), label, rule, premises);
                 Fact y = premise(a.right().label(), label, rule, premises);
                 Clause c = clause(s, sig);
-                return kernel.resolve(label, x, a.left().index(), subst(0, a.leftSubst(), sig, c), y, a.right().index(),
-                        subst(1, a.rightSubst(), sig, c), c);
+                return kernel.resolve(label, x, a.left().index(), subst(a.leftSubst(), sig, c), y, a.right().index(),
+                        subst(a.rightSubst(), sig, c), c);
             }
             if (args instanceof FactorArgs a) {
                 Fact x = sameStep(a.first(), a.second(), label, rule, premises);
                 Clause c = clause(s, sig);
-                return kernel.factor(label, x, a.first().index(), a.second().index(), subst(0, a.subst(), sig, c), c);
+                return kernel.factor(label, x, a.first().index(), a.second().index(), subst(a.subst(), sig, c), c);
             }
             if (args instanceof InstantiateArgs a) {
                 Fact x = premise(a.premise(), label, rule, premises);
                 Clause c = clause(s, sig);
-                return kernel.instantiate(label, x, subst(0, a.subst(), sig, c), c);
+                return kernel.instantiate(label, x, subst(a.subst(), sig, c), c);
             }
             if (args instanceof ParamodulateArgs a) {
                 Fact x = premise(a.from().label(), label, rule, premises);
@@ -555,17 +549,17 @@ public final class Checker {
                 Clause c = clause(s, sig);
                 int[] path = a.position().path().stream().mapToInt(Integer::intValue).toArray();
                 return kernel.paramodulate(label, x, a.from().index(), a.direction() == Direction.LEFT_TO_RIGHT, y,
-                        a.into().index(), path, subst(0, a.fromSubst(), sig, c), subst(1, a.intoSubst(), sig, c), c);
+                        a.into().index(), path, subst(a.fromSubst(), sig, c), subst(a.intoSubst(), sig, c), c);
             }
             if (args instanceof EqresArgs a) {
                 Fact x = premise(a.literal().label(), label, rule, premises);
                 Clause c = clause(s, sig);
-                return kernel.eqres(label, x, a.literal().index(), subst(0, a.subst(), sig, c), c);
+                return kernel.eqres(label, x, a.literal().index(), subst(a.subst(), sig, c), c);
             }
             if (args instanceof EqfactorArgs a) {
                 Fact x = sameStep(a.first(), a.second(), label, rule, premises);
                 Clause c = clause(s, sig);
-                return kernel.eqfactor(label, x, a.first().index(), a.second().index(), subst(0, a.subst(), sig, c), c);
+                return kernel.eqfactor(label, x, a.first().index(), a.second().index(), subst(a.subst(), sig, c), c);
             }
             if (args instanceof ReflexivityArgs) {
                 return kernel.reflexivity(label, clause(s, sig));
@@ -592,19 +586,14 @@ public final class Checker {
         }
 
         private Clause clause(Step s, Signature sig) throws Stop, InputError, StepProblem {
-            // Resolved ahead with the same symbols: the same clause the resolver would give here (see Preparer).
-            usePrepared = prepared != null && prepared.step() == s && prepared.signatureSize() == sig.size();
-            if (usePrepared) return prepared.clause();
             RawConclusion c = s.conclusion();
             if (c instanceof RawClause rc) return resolver.stepClause(rc, sig);
             throw reject(c.at(), s.label().text(), s.args().ruleName(),
                     s.args().ruleName() + " concludes a clause; write 'clause', not 'formula'");
         }
 
-        /** The {@code k}th substitution the step states (in the order of {@link Preparer#substitutions}). */
-        private Substitution subst(int k, RawSubstitution raw, Signature sig, Clause conclusion)
+        private Substitution subst(RawSubstitution raw, Signature sig, Clause conclusion)
                 throws InputError, StepProblem {
-            if (usePrepared) return prepared.substitutions()[k];
             if (raw == null) return null;
             // Only asked whether it holds a variable: the list itself for a few, a set for many.
             List<Variable> vars = conclusion.variables();

@@ -43,11 +43,6 @@ public final class Signature {
         return e != null && e.symbol().equals(s);
     }
 
-    /** The number of symbols known: it only grows, by the symbols that accepted steps introduce. */
-    public int size() {
-        return entries.size();
-    }
-
     public Collection<Entry> entries() {
         return Collections.unmodifiableCollection(entries.values());
     }

@@ -22,7 +22,6 @@ import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
-import java.util.function.Function;
 
 /**
  * Turns raw syntax into kernel values: decides which identifiers are variables and which are symbols, gives every
@@ -130,12 +129,11 @@ public final class Resolver {
      * whose kind and arity come from their use in the conclusion.
      */
     private final class Scope {
-        /** The symbols known at the step, by name; null while a problem is read. */
-        final Function<String, Symbol> signature;
+        final Signature signature;
         final Set<String> fresh;
         final Map<String, Use> freshUses;
 
-        Scope(Function<String, Symbol> signature, Set<String> fresh) {
+        Scope(Signature signature, Set<String> fresh) {
             this.signature = signature;
             this.fresh = fresh;
             this.freshUses = fresh.isEmpty() ? Map.of() : new LinkedHashMap<>();
@@ -144,7 +142,7 @@ public final class Resolver {
         Symbol symbol(String name, Symbol.Kind kind, int arity, Location at) throws InputError, StepProblem {
             if (signature != null && fresh.isEmpty()) {
                 // The common case, a symbol of the signature as it stands, without making a Symbol to compare.
-                Symbol known = signature.apply(name);
+                Symbol known = signature.lookup(name);
                 if (known != null && known.kind() == kind && known.arity() == arity) return known;
             }
             Symbol wanted = new Symbol(name, kind, arity);
@@ -161,7 +159,7 @@ public final class Resolver {
                 }
                 return u.symbol;
             }
-            Symbol known = signature.apply(name);
+            Symbol known = signature.lookup(name);
             if (known == null) {
                 throw new StepProblem(at, "unknown symbol " + name + ": it is neither a symbol of the problem nor"
                         + " introduced by an earlier step");
@@ -177,12 +175,6 @@ public final class Resolver {
 
     /** The symbols a step's {@code fresh} list names, with the kind and arity their use in the conclusion gives. */
     public List<Symbol> freshSymbols(RawConclusion conclusion, List<Name> fresh, Signature signature)
-            throws InputError, StepProblem {
-        return freshSymbols(conclusion, fresh, signature::lookup);
-    }
-
-    /** As {@link #freshSymbols(RawConclusion, List, Signature)}, with the symbols given by name. */
-    public List<Symbol> freshSymbols(RawConclusion conclusion, List<Name> fresh, Function<String, Symbol> signature)
             throws InputError, StepProblem {
         Set<String> names = new LinkedHashSet<>();
         for (Name n : fresh) {
@@ -204,32 +196,17 @@ public final class Resolver {
     public Formula stepFormula(RawFormula f, Signature signature, List<Name> fresh) throws InputError, StepProblem {
         Set<String> names = new LinkedHashSet<>();
         for (Name n : fresh) names.add(n.text());
-        return formula(f, new Scope(signature::lookup, names));
+        return formula(f, new Scope(signature, names));
     }
 
     /** A clause conclusion of a step. */
     public Clause stepClause(RawClause c, Signature signature) throws InputError, StepProblem {
-        return stepClause(c, signature::lookup);
-    }
-
-    /**
-     * A clause conclusion of a step, with the symbols known at that step given by name (null for an unknown name),
-     * so that a table other than the kernel's signature can stand in for it; the result is the same as with a
-     * signature that holds the same symbols.
-     */
-    public Clause stepClause(RawClause c, Function<String, Symbol> signature) throws InputError, StepProblem {
         return clause(c, new Scope(signature, Set.of()));
     }
 
     /** A substitution of a step whose conclusion has {@code conclusionVariables}. */
     public Substitution substitution(RawSubstitution s, Signature signature, Collection<Variable> conclusionVariables)
             throws InputError, StepProblem {
-        return substitution(s, signature::lookup, conclusionVariables);
-    }
-
-    /** As {@link #substitution(RawSubstitution, Signature, Collection)}, with the symbols given by name. */
-    public Substitution substitution(RawSubstitution s, Function<String, Symbol> signature,
-                                     Collection<Variable> conclusionVariables) throws InputError, StepProblem {
         Scope scope = new Scope(signature, Set.of());
         Map<Variable, Term> bindings = new LinkedHashMap<>();
         Set<String> names = new HashSet<>();
@@ -248,7 +225,7 @@ public final class Resolver {
                                        Set<String> out) {
         if (t.args().isEmpty()) {
             boolean conclusionVar = conclusionVariables.contains(terms.variable(t.name()));
-            if (conclusionVar || scope.signature.apply(t.name()) == null) out.add(t.name());
+            if (conclusionVar || scope.signature.lookup(t.name()) == null) out.add(t.name());
             return;
         }
         for (RawTerm a : t.args()) collectRangeVariables(a, scope, conclusionVariables, out);
