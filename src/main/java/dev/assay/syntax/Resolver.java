@@ -214,7 +214,7 @@ public final class Resolver {
             if (!names.add(b.variable().text())) {
                 throw new StepProblem(b.variable().at(), "the substitution binds " + b.variable().text() + " twice");
             }
-            Set<String> vars = new HashSet<>();
+            Variables vars = new Variables();
             collectRangeVariables(b.term(), scope, conclusionVariables, vars);
             bindings.put(terms.variable(b.variable().text()), term(b.term(), vars, scope));
         }
@@ -222,7 +222,7 @@ public final class Resolver {
     }
 
     private void collectRangeVariables(RawTerm t, Scope scope, Collection<Variable> conclusionVariables,
-                                       Set<String> out) {
+                                       Variables out) {
         if (t.args().isEmpty()) {
             boolean conclusionVar = conclusionVariables.contains(terms.variable(t.name()));
             if (conclusionVar || scope.signature.lookup(t.name()) == null) out.add(t.name());
@@ -233,13 +233,67 @@ public final class Resolver {
 
     // ---------------------------------------------------------------- formulas, clauses, terms
 
+    /**
+     * The names that are variables where a term is read, each with its variable and whether it was met: a clause's
+     * bracket, the variables bound around an atom, the variables of a substitution's range. Usually a few, so kept in
+     * arrays and searched in order; past {@link #FEW} they are also indexed by name.
+     */
+    private final class Variables {
+        private static final int FEW = 16;
+        private String[] names = new String[4];
+        private Variable[] variables = new Variable[4];
+        boolean[] used = new boolean[4];
+        int size;
+        private Map<String, Integer> index;
+
+        /** Adds a name; false when it is there already. */
+        boolean add(String name) {
+            if (indexOf(name) >= 0) return false;
+            if (size == names.length) {
+                names = java.util.Arrays.copyOf(names, 2 * size);
+                variables = java.util.Arrays.copyOf(variables, 2 * size);
+                used = java.util.Arrays.copyOf(used, 2 * size);
+            }
+            names[size] = name;
+            variables[size] = terms.variable(name);
+            if (index != null) index.put(name, size);
+            else if (size == FEW) {
+                index = new HashMap<>();
+                for (int i = 0; i <= size; i++) index.put(names[i], i);
+            }
+            size++;
+            return true;
+        }
+
+        /** The variable of this name, marked as met; null when the name is not one of these. */
+        Variable find(String name) {
+            int i = indexOf(name);
+            if (i < 0) return null;
+            used[i] = true;
+            return variables[i];
+        }
+
+        private int indexOf(String name) {
+            if (index != null) {
+                Integer i = index.get(name);
+                return i == null ? -1 : i;
+            }
+            for (int i = 0; i < size; i++) if (names[i].equals(name)) return i;
+            return -1;
+        }
+    }
+
     private Formula formula(RawFormula f, Scope scope) throws InputError, StepProblem {
         return formula(f, new ArrayList<>(), scope);
     }
 
     private Formula formula(RawFormula f, List<String> bound, Scope scope) throws InputError, StepProblem {
         if (f instanceof RawConstant c) return Formula.Constant.of(c.value());
-        if (f instanceof RawAtom a) return new Formula.Atomic(literal(false, a.atom(), new HashSet<>(bound), scope));
+        if (f instanceof RawAtom a) {
+            Variables vars = new Variables();
+            for (String v : bound) vars.add(v);
+            return new Formula.Atomic(literal(false, a.atom(), vars, scope));
+        }
         if (f instanceof RawNot n) return new Formula.Not(formula(n.body(), bound, scope));
         if (f instanceof RawAnd a) return new Formula.And(parts(a.operands(), bound, scope));
         if (f instanceof RawOr o) return new Formula.Or(parts(o.operands(), bound, scope));
@@ -267,34 +321,33 @@ public final class Resolver {
     }
 
     private Clause clause(RawClause c, Scope scope) throws InputError, StepProblem {
-        Set<String> vars = c.variables() == null ? Set.of() : new HashSet<>();
+        Variables vars = new Variables();
         if (c.variables() != null) {
             for (Name n : c.variables()) {
                 if (!vars.add(n.text())) throw new StepProblem(n.at(), "the variable " + n.text() + " is listed twice");
             }
         }
-        List<Literal> lits = new ArrayList<>();
+        List<Literal> lits = new ArrayList<>(c.literals().size());
         for (RawLiteral l : c.literals()) lits.add(literal(l.negated(), l.atom(), vars, scope));
-        Clause clause = new Clause(lits);
         if (c.variables() != null) {
-            List<Variable> occurring = clause.variables();
-            for (Name n : c.variables()) {
-                if (!occurring.contains(terms.variable(n.text()))) {
+            for (int i = 0; i < vars.size; i++) {
+                if (!vars.used[i]) {
+                    Name n = c.variables().get(i);
                     throw new StepProblem(n.at(), "the variable " + n.text() + " is listed but does not occur in the clause");
                 }
             }
         }
-        return clause;
+        return new Clause(lits);
     }
 
-    private Literal literal(boolean negated, RawAtomic atom, Set<String> vars, Scope scope)
+    private Literal literal(boolean negated, RawAtomic atom, Variables vars, Scope scope)
             throws InputError, StepProblem {
         if (atom instanceof RawEquation e) {
             Application eq = terms.equation(term(e.left(), vars, scope), term(e.right(), vars, scope));
             return new Literal(!(negated ^ e.negated()), eq);
         }
         RawTerm t = ((RawPredicateAtom) atom).term();
-        if (vars.contains(t.name())) {
+        if (vars.find(t.name()) != null) {
             throw new StepProblem(t.at(), t.name() + " is a variable here and cannot stand as an atom");
         }
         Symbol p = symbol(t.name(), Symbol.Kind.PREDICATE, t.args().size(), t.at(), scope);
@@ -303,12 +356,13 @@ public final class Resolver {
         return new Literal(!negated, terms.application(p, args));
     }
 
-    private Term term(RawTerm t, Set<String> vars, Scope scope) throws InputError, StepProblem {
-        if (vars.contains(t.name())) {
+    private Term term(RawTerm t, Variables vars, Scope scope) throws InputError, StepProblem {
+        Variable v = vars.find(t.name());
+        if (v != null) {
             if (!t.args().isEmpty()) {
                 throw new StepProblem(t.at(), t.name() + " is a variable here and cannot be applied to arguments");
             }
-            return terms.variable(t.name());
+            return v;
         }
         Symbol f = symbol(t.name(), Symbol.Kind.FUNCTION, t.args().size(), t.at(), scope);
         Term[] args = new Term[t.args().size()];
