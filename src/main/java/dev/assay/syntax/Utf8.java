@@ -56,16 +56,7 @@ final class Utf8 extends Reader {
             if (flushed) {
                 return -1;
             }
-            if (!endOfBytes && bytes.remaining() < 4) {
-                bytes.compact();
-                int n = in.read(bytes.array(), bytes.position(), bytes.remaining());
-                if (n < 0) {
-                    endOfBytes = true;
-                } else {
-                    bytes.position(bytes.position() + n);
-                }
-                bytes.flip();
-            }
+            refill();
             CoderResult result = decoder.decode(bytes, out, endOfBytes);
             if (result.isError()) {
                 error = result;
@@ -87,16 +78,7 @@ final class Utf8 extends Reader {
         if (error != null || flushed) {
             return 0;
         }
-        if (!endOfBytes && bytes.remaining() < 4) {
-            bytes.compact();
-            int n = in.read(bytes.array(), bytes.position(), bytes.remaining());
-            if (n < 0) {
-                endOfBytes = true;
-            } else {
-                bytes.position(bytes.position() + n);
-            }
-            bytes.flip();
-        }
+        refill();
         byte[] b = bytes.array();
         int at = bytes.position();
         int end = Math.min(bytes.limit(), at + length);
@@ -106,6 +88,21 @@ final class Utf8 extends Reader {
         }
         bytes.position(i);
         return i - at;
+    }
+
+    /** Reads more bytes when fewer than a whole character's worth are left. */
+    private void refill() throws IOException {
+        if (endOfBytes || bytes.remaining() >= 4) {
+            return;
+        }
+        bytes.compact();
+        int n = in.read(bytes.array(), bytes.position(), bytes.remaining());
+        if (n < 0) {
+            endOfBytes = true;
+        } else {
+            bytes.position(bytes.position() + n);
+        }
+        bytes.flip();
     }
 
     @Override
