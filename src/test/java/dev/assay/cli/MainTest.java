@@ -102,6 +102,9 @@ class MainTest {
             proof.append("step d").append(i).append(": clause not P").append(i).append(" or P").append(i + 1)
                     .append(" by clausify r").append(i).append('\n');
         }
+        // Then many small resolution steps, so that the check outlasts the limit on a fast machine too (about a
+        // second of checking at 300,000 steps a second).
+        for (int i = 0; i < 300_000; i++) proof.append("step e").append(i).append(": clause P1 by resolve c0.1, d0.1\n");
         Files.writeString(dir.resolve("c.problem"), problem);
         Files.writeString(dir.resolve("c.proof"), proof);
         Run r = run("check", "--timeout", "0.2", dir.resolve("c.problem").toString(), dir.resolve("c.proof").toString());
