@@ -94,6 +94,14 @@ class MainTest {
     }
 
     @Test
+    void aBenchRunThatMeasuresNothingSaysWhyAndFails(@TempDir Path dir) {
+        Run r = run("bench", "run", "--families", "corpus", "--corpus", dir.resolve("none").toString(), "--repeat", "1");
+        assertEquals(1, r.status(), r.all());
+        assertTrue(r.out().contains("Not measured: corpus: no folder " + dir.resolve("none")), r.out());
+        noStackTrace(r);
+    }
+
+    @Test
     void aTimeLimitStopsTheCheckWithExitFour(@TempDir Path dir) throws Exception {
         StringBuilder problem = new StringBuilder("problem chain\naxiom start: P0\n");
         StringBuilder proof = new StringBuilder("certificate for chain\nstep c0: clause P0 by clausify start\n");
