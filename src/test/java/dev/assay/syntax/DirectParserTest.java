@@ -33,6 +33,32 @@ class DirectParserTest {
     private static final int DEPTH = ProblemReader.DEFAULT_MAX_DEPTH;
 
     /** Every statement's record (locations included), then the error or the end, and where the reader stood. */
+    /**
+     * A statement with every component and every location, the records' own {@code toString} aside: a name, a literal
+     * reference and a term position print only their text there, so a wrong column in one would not show.
+     */
+    static String render(Object o) {
+        if (o instanceof Record r) {
+            StringBuilder sb = new StringBuilder(r.getClass().getSimpleName()).append('[');
+            java.lang.reflect.RecordComponent[] cs = r.getClass().getRecordComponents();
+            for (int i = 0; i < cs.length; i++) {
+                try {
+                    sb.append(i == 0 ? "" : ", ").append(cs[i].getName()).append('=')
+                            .append(render(cs[i].getAccessor().invoke(r)));
+                } catch (ReflectiveOperationException e) {
+                    throw new AssertionError(e);
+                }
+            }
+            return sb.append(']').toString();
+        }
+        if (o instanceof List<?> l) {
+            StringBuilder sb = new StringBuilder("[");
+            for (Object e : l) sb.append(sb.length() == 1 ? "" : ", ").append(render(e));
+            return sb.append(']').toString();
+        }
+        return String.valueOf(o);
+    }
+
     static String transcript(String text, boolean problem, boolean direct, int maxDepth, long maxTermSize) {
         StringBuilder out = new StringBuilder();
         int handOvers = 0;
@@ -40,7 +66,7 @@ class DirectParserTest {
             if (problem) {
                 ProblemReader reader = new ProblemReader("t.problem", new StringReader(text), maxDepth, maxTermSize, direct);
                 try {
-                    for (ProblemStatement s; (s = reader.next()) != null; ) out.append(s).append('\n');
+                    for (ProblemStatement s; (s = reader.next()) != null; ) out.append(render(s)).append('\n');
                 } finally {
                     handOvers = reader.readAfterHandOver();
                 }
@@ -48,7 +74,7 @@ class DirectParserTest {
                 CertificateReader reader =
                         new CertificateReader("t.proof", new StringReader(text), maxDepth, maxTermSize, direct);
                 try {
-                    for (CertificateStatement s; (s = reader.next()) != null; ) out.append(s).append('\n');
+                    for (CertificateStatement s; (s = reader.next()) != null; ) out.append(render(s)).append('\n');
                 } finally {
                     handOvers = reader.readAfterHandOver();
                 }
