@@ -143,29 +143,21 @@ abstract class CertificateSource implements AutoCloseable {
         private void produceAll(Direct direct) {
             Object[] out = new Object[BATCH];
             int n = 0;
-            Throwable error = null;
             try {
                 while (!closed) {
-                    long mark = direct.consumed;
-                    n = fill(direct, out, mark);
-                    if (n < 0) {
-                        n = -n - 1;
-                        break;
-                    }
+                    n = fill(direct, out);
+                    if (ended || failure != null) break;
                     queue.put(n == BATCH ? out : java.util.Arrays.copyOf(out, n));
                     out = new Object[BATCH];
                     n = 0;
                 }
             } catch (InterruptedException e) {
                 return;
-            } catch (Throwable t) {
-                error = t;
-                n = filled;
             }
             if (closed) return;
             Object[] last = new Object[n + 1];
             System.arraycopy(out, 0, last, 0, n);
-            last[n] = new End(error, direct.sha256());
+            last[n] = new End(failure, direct.sha256());
             try {
                 queue.put(last);
             } catch (InterruptedException ignored) {
@@ -173,24 +165,32 @@ abstract class CertificateSource implements AutoCloseable {
             }
         }
 
-        /** Statements in the batch being filled, for the batch that ends with an error. */
-        private int filled;
+        /** Set on the reading thread when the statements have ended, or by what ended them. */
+        private boolean ended;
+        private Throwable failure;
 
         /**
-         * Fills {@code out} with statements until it holds {@link #BATCH} of them or {@link #BATCH_BYTES} of the file
-         * were read since {@code mark}, and returns how many; {@code -(n + 1)} for the last n at the end. A method of
-         * its own, like the checker's batches, so that the compiler compiles it whole rather than in place.
+         * Fills {@code out} with the next statements until it holds {@link #BATCH} of them or about
+         * {@link #BATCH_BYTES} of the file was read, and returns how many; at the end of the statements it sets
+         * {@link #ended}, or {@link #failure} to the error that ended them. A method of its own, like the checker's
+         * batches, so that the compiler compiles it whole rather than in place.
          */
-        private int fill(Direct direct, Object[] out, long mark) throws InputError, IOException {
+        private int fill(Direct direct, Object[] out) {
+            long mark = direct.consumed;
             int n = 0;
-            filled = 0;
-            while (true) {
-                CertificateStatement s = direct.next();
-                if (s == null) return -(n + 1);
-                out[n++] = s;
-                filled = n;
-                if (n == BATCH || direct.consumed - mark >= BATCH_BYTES) return n;
+            try {
+                do {
+                    CertificateStatement s = direct.next();
+                    if (s == null) {
+                        ended = true;
+                        return n;
+                    }
+                    out[n++] = s;
+                } while (n < BATCH && direct.consumed - mark < BATCH_BYTES);
+            } catch (Throwable t) {
+                failure = t;
             }
+            return n;
         }
 
         @Override
