@@ -33,8 +33,9 @@ final class LabelTable {
 
     /** Adds the label; false when the table already said "perhaps" for it. */
     boolean add(String label) {
-        long number = number(label);
-        long key = key(label, number);
+        int stem = stemLength(label);
+        long number = number(label, stem);
+        long key = key(label, stem, number);
         long bit = 1L << (number & 63);
         int i = slot(key);
         if (keys[i] == 0) {
@@ -53,8 +54,9 @@ final class LabelTable {
 
     /** Whether this label may have been added: true for every added label, rarely for others. */
     boolean mayContain(String label) {
-        long number = number(label);
-        int i = slot(key(label, number));
+        int stem = stemLength(label);
+        long number = number(label, stem);
+        int i = slot(key(label, stem, number));
         return keys[i] != 0 && (words[i] & (1L << (number & 63))) != 0;
     }
 
@@ -93,8 +95,12 @@ final class LabelTable {
 
     /** The number the trailing digits spell (0 when there are none). */
     static long number(String label) {
+        return number(label, stemLength(label));
+    }
+
+    private static long number(String label, int stem) {
         long n = 0;
-        for (int i = stemLength(label); i < label.length(); i++) n = n * 10 + (label.charAt(i) - '0');
+        for (int i = stem; i < label.length(); i++) n = n * 10 + (label.charAt(i) - '0');
         return n;
     }
 
@@ -102,8 +108,7 @@ final class LabelTable {
      * The word's key: FNV-1a over the stem's UTF-16 units and the digit count, plus the number's high bits times an
      * odd constant, then a final mix (a bijection, so one stem's words never share a key); never 0.
      */
-    static long key(String label, long number) {
-        int stem = stemLength(label);
+    private static long key(String label, int stem, long number) {
         long h = 0xcbf29ce484222325L;
         for (int i = 0; i < stem; i++) {
             h ^= label.charAt(i);
