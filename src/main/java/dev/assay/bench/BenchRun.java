@@ -38,10 +38,21 @@ public final class BenchRun {
 
     private final Options options;
     private final Consumer<String> progress;
+    private final List<String> skipped = new ArrayList<>();
 
     public BenchRun(Options options, Consumer<String> progress) {
         this.options = options;
         this.progress = progress;
+    }
+
+    /** What {@link #run} was asked for and did not measure, and why, in order. */
+    public List<String> skipped() {
+        return List.copyOf(skipped);
+    }
+
+    private void skip(String why) {
+        skipped.add(why);
+        progress.accept(why + "; skipped");
     }
 
     public List<Row> run() throws IOException, InterruptedException {
@@ -51,7 +62,7 @@ public final class BenchRun {
             for (String name : options.families()) {
                 if (name.equals(Families.CORPUS)) {
                     if (!Files.isDirectory(options.corpus())) {
-                        progress.accept("corpus: no folder " + options.corpus() + "; skipped");
+                        skip("corpus: no folder " + options.corpus());
                         continue;
                     }
                     List<Families.Member> members = Families.copyCorpus(options.corpus(), dir.resolve("corpus"));
@@ -64,7 +75,7 @@ public final class BenchRun {
                 if (f == null) throw new IllegalArgumentException("no family " + name + "; the families are " + Families.names());
                 for (long n : options.sizes()) {
                     if (n < f.minSteps()) {
-                        progress.accept(name + ": " + n + " steps is below its minimum of " + f.minSteps() + "; skipped");
+                        skip(name + ": " + n + " steps is below its minimum of " + f.minSteps());
                         continue;
                     }
                     progress.accept(name + ": generating " + n + " steps");

@@ -146,12 +146,11 @@ final class BenchCommand implements Runnable {
             }
             BenchRun.Options options = new BenchRun.Options(families, sizes, repeat, xmx, forget, corpus, keep, timeout,
                     jvmArgs);
-            List<String> skipped = new ArrayList<>();
-            List<BenchRun.Row> rows = new BenchRun(options, line -> {
+            BenchRun run = new BenchRun(options, line -> {
                 err.println("assay bench: " + line);
                 err.flush();
-                if (line.endsWith("; skipped")) skipped.add(line);
-            }).run();
+            });
+            List<BenchRun.Row> rows = run.run();
             StringBuilder cmd = new StringBuilder("assay bench run");
             cmd.append(" --families ").append(String.join(",", families));
             cmd.append(" --sizes ").append(String.join(",", sizes.stream().map(String::valueOf).toList()));
@@ -160,8 +159,7 @@ final class BenchCommand implements Runnable {
             if (forget) cmd.append(" --forget");
             String md = BenchRun.markdown(options, rows, cmd.toString());
             // What was asked for and not measured is said in the table's file too, not only on standard error.
-            if (!skipped.isEmpty()) md += "\nNot measured: " + String.join("; ", skipped.stream()
-                    .map(l -> l.substring(0, l.length() - "; skipped".length())).toList()) + ".\n";
+            if (!run.skipped().isEmpty()) md += "\nNot measured: " + String.join("; ", run.skipped()) + ".\n";
             out.print(md);
             if (outFile != null) Files.writeString(outFile, md, StandardCharsets.UTF_8);
             boolean ok = rows.stream().allMatch(r -> r.verdict() != null && !r.verdict().contains("rejected")
