@@ -179,7 +179,7 @@ final class ReaderCharStream implements CharStream {
         boolean lower = kinds <= LOWER;
         String text;
         if (length > SHORT_NAME) {
-            text = latin1(p, length);
+            text = new String(latin1(p, length), StandardCharsets.ISO_8859_1);
             nameType = FastLexer.nameType(text, lower);
         } else {
             int slot = (h ^ (h >>> 11) ^ (h >>> 22)) & (names.length - 1);
@@ -188,11 +188,7 @@ final class ReaderCharStream implements CharStream {
                 text = names[slot];
                 nameType = nameTypes[slot];
             } else {
-                byte[] copy = new byte[length];
-                int[] d = data;
-                for (int i = 0; i < length; i++) {
-                    copy[i] = (byte) d[p + i];
-                }
+                byte[] copy = latin1(p, length);
                 text = new String(copy, StandardCharsets.ISO_8859_1);
                 // Hashed here, on the reading thread when it reads ahead: the checker looks every name up by it.
                 text.hashCode();
@@ -207,13 +203,13 @@ final class ReaderCharStream implements CharStream {
         return text;
     }
 
-    /** The text of {@code length} name characters (all ASCII) from window index {@code at}. */
-    private String latin1(int at, int length) {
+    /** The bytes of {@code length} name characters (all ASCII) from window index {@code at}. */
+    private byte[] latin1(int at, int length) {
         byte[] b = new byte[length];
         for (int i = 0; i < length; i++) {
             b[i] = (byte) data[at + i];
         }
-        return new String(b, StandardCharsets.ISO_8859_1);
+        return b;
     }
 
     /** The token type of the name {@link #consumeName} returned last. */
@@ -278,13 +274,7 @@ final class ReaderCharStream implements CharStream {
         if (ascii != null && pendingHigh < 0) {
             int n = readAscii();
             if (n > 0) {
-                int[] d = data;
-                for (int i = count; i < count + n; i++) {
-                    if (d[i] == '\n') {
-                        line++;
-                        lineStart = start + i + 1;
-                    }
-                }
+                countLines(count, count + n);
                 count += n;
                 return true;
             }
@@ -326,15 +316,23 @@ final class ReaderCharStream implements CharStream {
             }
             d[n++] = c;
         }
-        // The line and column of the end, for the message about bytes that are not UTF-8 that the next read may throw.
-        for (int i = count; i < n; i++) {
+        countLines(count, n);
+        count = n;
+        return count > added || fill();
+    }
+
+    /**
+     * Counts the lines of window indices {@code from..to} (exclusive): the line and column of the end, for the message
+     * about bytes that are not UTF-8 that the next read may throw.
+     */
+    private void countLines(int from, int to) {
+        int[] d = data;
+        for (int i = from; i < to; i++) {
             if (d[i] == '\n') {
                 line++;
                 lineStart = start + i + 1;
             }
         }
-        count = n;
-        return count > added || fill();
     }
 
     private int readAscii() {
