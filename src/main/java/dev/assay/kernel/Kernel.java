@@ -318,7 +318,7 @@ public final class Kernel {
         Clause bApart = renameApart(b.clause(), a.clause());
         Literal ljApart = bApart.literal(j);
         Clause rest = remove(a.clause(), li, bApart, ljApart);
-        return unifyThenCompare(rule, label, stated, atomPairs(li, ljApart), mgu -> mgu.apply(rest),
+        return unifyThenCompare(rule, label, stated, li, ljApart, rest,
                 () -> "the atoms of " + ref(a, i) + " and " + ref(b, j) + ", " + Printer.term(li.atom()) + " and "
                         + Printer.term(lj.atom()) + ", do not unify: ");
     }
@@ -349,7 +349,7 @@ public final class Kernel {
             }
             return sameSet(rule, label, stated, sigma.apply(a.clause()));
         }
-        return unifyThenCompare(rule, label, stated, atomPairs(li, lj), mgu -> mgu.apply(a.clause()),
+        return unifyThenCompare(rule, label, stated, li, lj, a.clause(),
                 () -> ref(a, i) + " and " + ref(a, j) + " do not unify: ");
     }
 
@@ -620,7 +620,8 @@ public final class Kernel {
             }
         }
         if (bad == null && c != null) {
-            for (Literal l : c.literals()) if ((bad = firstOutside(l.atom(), signature)) != null) break;
+            List<Literal> ls = c.literals();
+            for (int i = 0; i < ls.size(); i++) if ((bad = firstOutside(ls.get(i).atom(), signature)) != null) break;
         }
         for (Substitution s : subs == null ? new Substitution[0] : subs) {
             if (bad != null) break;
@@ -683,16 +684,19 @@ public final class Kernel {
 
     /** The clause without every occurrence of {@code l} (a clause is a set). */
     private static Clause remove(Clause c, Literal l) {
-        List<Literal> out = new ArrayList<>(c.width());
-        for (Literal x : c.literals()) if (!x.equals(l)) out.add(x);
+        List<Literal> in = c.literals();
+        List<Literal> out = new ArrayList<>(in.size());
+        for (int i = 0; i < in.size(); i++) if (!in.get(i).equals(l)) out.add(in.get(i));
         return new Clause(out);
     }
 
     /** {@code x} without {@code lx}, then {@code y} without {@code ly}, as one clause. */
     private static Clause remove(Clause x, Literal lx, Clause y, Literal ly) {
-        List<Literal> out = new ArrayList<>(x.width() + y.width());
-        for (Literal l : x.literals()) if (!l.equals(lx)) out.add(l);
-        for (Literal l : y.literals()) if (!l.equals(ly)) out.add(l);
+        List<Literal> xs = x.literals();
+        List<Literal> ys = y.literals();
+        List<Literal> out = new ArrayList<>(xs.size() + ys.size());
+        for (int i = 0; i < xs.size(); i++) if (!xs.get(i).equals(lx)) out.add(xs.get(i));
+        for (int i = 0; i < ys.size(); i++) if (!ys.get(i).equals(ly)) out.add(ys.get(i));
         return new Clause(out);
     }
 
@@ -703,18 +707,19 @@ public final class Kernel {
     }
 
     /**
-     * Tries each way of setting the atoms equal: the first most general unifier whose derived clause has the
-     * conclusion as a variant accepts; otherwise the rejection shows the first derived clause, or why none unified.
+     * Tries each way of setting the atoms of {@code x} and {@code y} equal, as written and, for two equations, also
+     * with one side of {@code y} swapped: the first most general unifier under which {@code base} has the conclusion
+     * as a variant accepts; otherwise the rejection shows the first derived clause, or why none unified.
      */
-    private Outcome unifyThenCompare(String rule, String label, Clause stated, List<Term[]> pairs,
-                                     java.util.function.Function<Substitution, Clause> derive,
+    private Outcome unifyThenCompare(String rule, String label, Clause stated, Literal x, Literal y, Clause base,
                                      java.util.function.Supplier<String> notUnifiable) {
+        Term swapped = x.isEquation() && y.isEquation() ? terms.equation(y.right(), y.left()) : null;
         String failure = null;
         Clause firstDerived = null;
-        for (Term[] pair : pairs) {
-            Unification.Result r = Unification.mostGeneralUnifier(terms, pair[0], pair[1]);
+        for (int k = 0; k < (swapped == null ? 1 : 2); k++) {
+            Unification.Result r = Unification.mostGeneralUnifier(terms, x.atom(), k == 0 ? y.atom() : swapped);
             if (r instanceof Unification.Unified u) {
-                Clause derived = derive.apply(u.unifier());
+                Clause derived = u.unifier().apply(base);
                 if (Variants.areVariants(stated, derived, Variants.DEFAULT_BUDGET)) return accept(label, stated);
                 if (firstDerived == null) firstDerived = derived;
             } else if (failure == null) {
@@ -723,16 +728,6 @@ public final class Kernel {
         }
         if (firstDerived != null) return notVariant(rule, stated, firstDerived);
         return reject(rule, notUnifiable.get() + failure, Printer.clause(stated), null);
-    }
-
-    /** The ways two atoms can be set equal: as written, and for two equations also with one side swapped. */
-    private List<Term[]> atomPairs(Literal x, Literal y) {
-        List<Term[]> out = new ArrayList<>(2);
-        out.add(new Term[] {x.atom(), y.atom()});
-        if (x.isEquation() && y.isEquation()) {
-            out.add(new Term[] {x.atom(), terms.equation(y.right(), y.left())});
-        }
-        return out;
     }
 
     /**

@@ -108,8 +108,10 @@ public final class Substitution {
     public Clause apply(Clause c) {
         if (bindings.isEmpty()) return c;
         Map<Term, Term> memo = null;
-        List<Literal> out = new ArrayList<>(c.width());
-        for (Literal l : c.literals()) {
+        List<Literal> in = c.literals();
+        List<Literal> out = new ArrayList<>(in.size());
+        for (int i = 0; i < in.size(); i++) {
+            Literal l = in.get(i);
             Application atom = l.atom();
             Term image;
             if (atom.isGround()) {

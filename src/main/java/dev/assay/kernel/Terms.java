@@ -101,16 +101,18 @@ final class Terms {
      * root after root. When the trees together have at most 64 nodes the variables are gathered in a list without
      * hashing (for a few variables, looking through the list costs less); beyond, in a linked hash set.
      */
-    static List<Variable> variablesOf(Iterable<? extends Term> roots) {
+    static List<Variable> variablesOf(List<? extends Term> roots) {
+        // Indexed loops: a hot path, and an iterator the compiler cannot always remove costs an object per call.
+        int n = roots.size();
         long size = 0;
-        for (Term t : roots) size += Math.min(t.treeSize(), 65); // tree sizes can be huge
+        for (int i = 0; i < n; i++) size += Math.min(roots.get(i).treeSize(), 65); // tree sizes can be huge
         if (size <= 64) {
-            List<Variable> few = new ArrayList<>();
-            for (Term t : roots) collectSmall(t, few);
+            List<Variable> few = new ArrayList<>(4);
+            for (int i = 0; i < n; i++) collectSmall(roots.get(i), few);
             return few;
         }
         Set<Variable> many = new LinkedHashSet<>();
-        for (Term t : roots) collectVariables(t, many);
+        for (int i = 0; i < n; i++) collectVariables(roots.get(i), many);
         return new ArrayList<>(many);
     }
 
