@@ -280,6 +280,7 @@ public final class Checker {
                 sizeLimit(problemFile, problemPath, "problem");
                 problemBytes = Files.readAllBytes(problemPath);
             } catch (IOException e) {
+                if (interrupted(e)) throw stopped(new Location(problemFile, 1, 1), "while reading the problem");
                 throw inputError(problemFile, "cannot read the problem file: " + describe(e));
             }
             problemSha = sha256(problemBytes);
@@ -289,9 +290,18 @@ public final class Checker {
                 List<dev.assay.syntax.ProblemStatement> statements = new ArrayList<>();
                 try (ProblemReader reader = new ProblemReader(problemFile,
                         new java.io.ByteArrayInputStream(problemBytes), options.maxDepth(), options.maxTermSize())) {
-                    for (var st = reader.next(); st != null; st = reader.next()) statements.add(st);
+                    for (var st = reader.next(); st != null; st = reader.next()) {
+                        // A large problem takes a while to read; the time limit is looked at once per statement.
+                        if (Thread.currentThread().isInterrupted()) {
+                            throw stopped(st.at(), "while reading the problem, at this statement");
+                        }
+                        statements.add(st);
+                    }
                 }
                 problem = resolver.problem(statements);
+                if (Thread.currentThread().isInterrupted()) {
+                    throw stopped(new Location(problemFile, 1, 1), "after reading the problem, before the certificate");
+                }
             } catch (InputError e) {
                 throw inputError(e);
             } catch (IOException e) {
@@ -311,6 +321,7 @@ public final class Checker {
                 source = CertificateSource.open(certificateFile, certificatePath, options.maxDepth(),
                         options.maxTermSize(), options.threads() > 1);
             } catch (IOException e) {
+                if (interrupted(e)) throw stopped(new Location(certificateFile, 1, 1), "while opening the certificate");
                 throw inputError(certificateFile, "cannot read the certificate file: " + describe(e));
             }
             try (source) {
@@ -322,11 +333,9 @@ public final class Checker {
                 certificateSha = source.sha256();
                 finish(last);
             } catch (InterruptedException e) {
-                throw stopped();
+                throw stoppedInCertificate();
             } catch (IOException e) {
-                if (e instanceof java.nio.channels.ClosedByInterruptException || Thread.currentThread().isInterrupted()) {
-                    throw stopped();
-                }
+                if (interrupted(e)) throw stoppedInCertificate();
                 throw inputError(certificateFile, "cannot read the certificate file: " + describe(e));
             }
         }
@@ -357,9 +366,20 @@ public final class Checker {
 
         private static final int BATCH = 16;
 
-        private Stop stopped() {
-            return new Stop(Verdict.TIMEOUT, new Failure(certificateFile, 1, 1, null, null,
-                    "the check was stopped at its time limit while reading the certificate", null, null, null));
+        /** Stopped at the time limit while the certificate was read: at the last statement read, if any. */
+        private Stop stoppedInCertificate() {
+            return stopped(last, last.line() == 1 && last.column() == 1 ? "while reading the certificate"
+                    : "while reading the certificate, after the statement here");
+        }
+
+        private Stop stopped(Location at, String when) {
+            return new Stop(Verdict.TIMEOUT, new Failure(at.file(), at.line(), at.column(), null, null,
+                    "the check was stopped at its time limit " + when, null, null, null));
+        }
+
+        /** Whether a failed read was the time limit's interrupt rather than the file. */
+        private static boolean interrupted(IOException e) {
+            return e instanceof java.nio.channels.ClosedByInterruptException || Thread.currentThread().isInterrupted();
         }
 
         private void sizeLimit(String file, Path path, String what) throws IOException, Stop {
