@@ -4,7 +4,6 @@ import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.HashSet;
 import java.util.LinkedHashMap;
-import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
@@ -34,6 +33,14 @@ public final class Kernel {
     private Clause apartFrom;
     private List<Variable> apartOf;
     private Clause apart;
+    /**
+     * Large terms (more than 64 nodes as a tree) all of whose symbols the signature admitted when an earlier step
+     * stated them. The signature only grows and never changes a symbol it holds, so such a term stays admitted, and a
+     * later conclusion that shares it (hash-consing makes shared structure the same object) is checked only for what
+     * is new in it. Filled only from the signature as it stands, never from one a rule extends on trial. Held weakly,
+     * like the term table, and compared by identity (terms do not override {@code equals}).
+     */
+    private final Map<Application, Boolean> admittedLarge = new java.util.WeakHashMap<>();
 
     public Kernel(Problem problem, TermFactory terms) {
         this.problem = problem;
@@ -635,11 +642,25 @@ public final class Kernel {
     }
 
     /** The first symbol of {@code t} (pre-order, equality aside) that {@code signature} does not admit, or null. */
-    private static Symbol firstOutside(Term t, Signature signature) {
+    private Symbol firstOutside(Term t, Signature signature) {
         if (t.treeSize() <= 64) return firstOutsideSmall(t, signature);
-        Set<Symbol> used = new LinkedHashSet<>();
-        Formulas.collectSymbols(t, used);
-        for (Symbol s : used) if (!signature.admits(s)) return s;
+        // Each distinct subterm once, in the pre-order of Terms.forEachSubterm, without entering a large subterm
+        // admitted before: it holds no symbol outside the signature, so the first one outside is the same.
+        Set<Term> seen = java.util.Collections.newSetFromMap(new java.util.IdentityHashMap<>());
+        List<Application> large = new ArrayList<>();
+        java.util.ArrayDeque<Term> stack = new java.util.ArrayDeque<>();
+        stack.push(t);
+        while (!stack.isEmpty()) {
+            if (!(stack.pop() instanceof Application a) || !seen.add(a)) continue;
+            if (a.treeSize() > 64) {
+                if (admittedLarge.containsKey(a)) continue;
+                large.add(a);
+            }
+            if (!a.isEquation() && !signature.admits(a.symbol())) return a.symbol();
+            Term[] args = a.argumentArray();
+            for (int i = args.length - 1; i >= 0; i--) stack.push(args[i]);
+        }
+        if (signature == this.signature) for (Application a : large) admittedLarge.put(a, Boolean.TRUE);
         return null;
     }
 
