@@ -55,7 +55,7 @@ final class CheckCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        Checker.Options options = limits.options(spec.commandLine().getErr());
+        Checker.Options options = limits.options(spec.commandLine().getErr(), 1);
         if (options == null) return 2;
         if (parseOnly) return parseOnly(new Checker(options));
         HtmlReport page = html == null ? null : new HtmlReport();

@@ -98,7 +98,8 @@ final class GateCommand implements Callable<Integer> {
                 return 2;
             }
         }
-        Checker.Options options = limits.options(err);
+        // Jobs beyond the number of cases never run, so they leave their processors to the threads of the others.
+        Checker.Options options = limits.options(err, Math.min(jobs, Math.max(1, pairs.size())));
         if (options == null) return 2;
         Progress progress = new Progress(err, pairs.size(), "cases");
         List<GateCase> cases = new Gate(jobs, (long) (timeout * 1000), (long) (totalTimeout * 1000), options)
