@@ -365,7 +365,12 @@ public final class Unification {
                         Term r = path.peek();
                         Application s = schemaOf(r);
                         int[] i = next.peek();
-                        if (s == null || i[0] >= s.arity()) {
+                        // A class whose schema is ground is on no cycle: each application of a class has its
+                        // arguments in the classes of the schema's (their arguments were unified when they met), a
+                        // class holds at most one ground term (two would have clashed), so every path from here
+                        // passes through classes of ever smaller ground terms and cannot come back. Nor can it reach
+                        // a class on a cycle, so leaving it out does not change which cycle is found first.
+                        if (s == null || s.isGround() || i[0] >= s.arity()) {
                             colour.put(r, 2);
                             path.pop();
                             next.pop();

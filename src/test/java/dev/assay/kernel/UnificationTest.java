@@ -230,6 +230,28 @@ class UnificationTest {
         assertEquals("2", n.position());
     }
 
+    /** s(s(...s(zero)...)), {@code n} applications: a ground term of n + 1 nodes. */
+    private String numeral(int n) {
+        return "s(".repeat(n) + "zero" + ")".repeat(n);
+    }
+
+    @Test
+    void occursCheckBesideLargeGroundTerms() {
+        // Large enough for the union-find solver, whose cycle test does not enter a class whose schema is ground: such
+        // a class is on no cycle. The cycle through x and y is still found, and with the message it had.
+        String big = numeral(100);
+        Unification.NotUnifiable n = fail("Tally(x, " + big + ", y)", "Tally(f(y), z, f(x))");
+        assertTrue(n.occursCheck());
+        assertTrue(n.explanation().matches("[xy] occurs in f\\([xy]\\) once [xy] := f\\([xy]\\)"), n.explanation());
+        // The cycle runs through a variable bound to a large ground term's neighbour.
+        n = fail("Tally(x, x, " + big + ")", "Tally(g(y, " + big + "), y, z)");
+        assertTrue(n.occursCheck());
+        assertTrue(n.explanation().matches("[xy] occurs in g\\([xy], .*"), n.explanation());
+        // Without a cycle: a variable bound to the large ground term, another to a term that contains it.
+        assertMostGeneral("Tally(x, y, w)", "Tally(" + big + ", f(x), f(y))",
+                "{x := " + big + ", y := f(" + big + "), w := f(f(" + big + "))}");
+    }
+
     @Test
     void occursCheckMessageNamesOnlyRealVariables() {
         // x =? f(g(x)): the cycle passes through the class of g(x), which holds no variable. The explanation should
