@@ -59,8 +59,8 @@ public final class Clause {
     public boolean sameSet(Clause other) {
         if (literals.size() <= 8 && other.literals.size() <= 8) {
             // A few literals: each set contained in the other, without building either set.
-            for (int i = 0; i < literals.size(); i++) if (!other.literals.contains(literals.get(i))) return false;
-            for (int i = 0; i < other.literals.size(); i++) if (!literals.contains(other.literals.get(i))) return false;
+            for (Literal l : literals) if (!other.literals.contains(l)) return false;
+            for (Literal l : other.literals) if (!literals.contains(l)) return false;
             return true;
         }
         return asSet().equals(other.asSet());

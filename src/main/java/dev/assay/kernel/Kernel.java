@@ -643,7 +643,11 @@ public final class Kernel {
 
     /** The first symbol of {@code t} (pre-order, equality aside) that {@code signature} does not admit, or null. */
     private Symbol firstOutside(Term t, Signature signature) {
-        if (t.treeSize() <= 64) return firstOutsideSmall(t, signature);
+        // Two methods, so that this one stays small enough for the compiler to inline on the common path.
+        return t.treeSize() <= 64 ? firstOutsideSmall(t, signature) : firstOutsideLarge(t, signature);
+    }
+
+    private Symbol firstOutsideLarge(Term t, Signature signature) {
         // Each distinct subterm once, in the pre-order of Terms.forEachSubterm, without entering a large subterm
         // admitted before: it holds no symbol outside the signature, so the first one outside is the same.
         Set<Term> seen = java.util.Collections.newSetFromMap(new java.util.IdentityHashMap<>());
