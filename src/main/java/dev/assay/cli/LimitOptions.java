@@ -25,22 +25,13 @@ final class LimitOptions {
                     + " or 1 on one processor; in a gate, 1 when its jobs already take every processor)")
     Integer threads;
 
-    /**
-     * The threads each check gets when none were asked for: two (one reads ahead) when there are processors for two
-     * per job, else one. Measured on two cores (docs/performance.md): a gate of two jobs with two threads each took
-     * 20 % longer than with one thread each, four busy threads sharing two processors.
-     */
-    static int defaultThreads(int processors, int jobs) {
-        return processors >= 2 * Math.max(1, jobs) ? 2 : 1;
-    }
-
     /** The checker options for {@code jobs} checks at once, or null after printing why they are not valid. */
     Checker.Options options(java.io.PrintWriter err, int jobs) {
         if (maxDepth < 1 || maxInputBytes < 1 || maxTermSize < 1 || maxSteps < 1 || (threads != null && threads < 1)) {
             err.println("assay: --max-depth, --max-input-size, --max-term-size, --max-steps and --threads take positive numbers");
             return null;
         }
-        int n = threads != null ? threads : defaultThreads(Runtime.getRuntime().availableProcessors(), jobs);
+        int n = threads != null ? threads : Checker.Options.defaultThreads(Runtime.getRuntime().availableProcessors(), jobs);
         return new Checker.Options(maxDepth, maxInputBytes, maxTermSize, maxSteps, n);
     }
 }

@@ -15,13 +15,13 @@ class LimitOptionsTest {
 
     @Test
     void twoThreadsPerCheckOnlyWhenEveryJobCanHaveTwoProcessors() {
-        assertEquals(2, LimitOptions.defaultThreads(2, 1), "one check on two processors reads ahead");
-        assertEquals(1, LimitOptions.defaultThreads(2, 2), "two jobs on two processors: one thread each");
-        assertEquals(1, LimitOptions.defaultThreads(1, 1), "one processor");
-        assertEquals(2, LimitOptions.defaultThreads(8, 4));
-        assertEquals(1, LimitOptions.defaultThreads(8, 5));
-        assertEquals(1, LimitOptions.defaultThreads(8, 8));
-        assertEquals(2, LimitOptions.defaultThreads(4, 0), "no jobs counts as one");
+        assertEquals(2, Checker.Options.defaultThreads(2, 1), "one check on two processors reads ahead");
+        assertEquals(1, Checker.Options.defaultThreads(2, 2), "two jobs on two processors: one thread each");
+        assertEquals(1, Checker.Options.defaultThreads(1, 1), "one processor");
+        assertEquals(2, Checker.Options.defaultThreads(8, 4));
+        assertEquals(1, Checker.Options.defaultThreads(8, 5));
+        assertEquals(1, Checker.Options.defaultThreads(8, 8));
+        assertEquals(2, Checker.Options.defaultThreads(4, 0), "no jobs counts as one");
     }
 
     @Test
@@ -35,7 +35,7 @@ class LimitOptionsTest {
         o.threads = null;
         int processors = Runtime.getRuntime().availableProcessors();
         Checker.Options chosen = o.options(err, processors);
-        assertEquals(LimitOptions.defaultThreads(processors, processors), chosen.threads());
+        assertEquals(Checker.Options.defaultThreads(processors, processors), chosen.threads());
         assertEquals(1, chosen.threads(), "as many jobs as processors leave none for reading ahead");
     }
 
