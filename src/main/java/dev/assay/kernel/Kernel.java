@@ -29,10 +29,20 @@ public final class Kernel {
     private final Substitution none;
     private final Signature signature;
     private final Map<String, Fact> axioms = new LinkedHashMap<>();
-    /** The last clause {@link #renameApart} renamed, the variables it was kept apart from, and the result. */
-    private Clause apartFrom;
-    private List<Variable> apartOf;
-    private Clause apart;
+    /**
+     * The last clause {@link #renameApart} renamed, the variables it was kept apart from, and the result: one
+     * immutable record, so that deferred checks on several threads read a whole one or none.
+     */
+    private Apart lastApart;
+
+    private record Apart(Clause from, List<Variable> of, Clause result) {
+    }
+
+    /**
+     * Deferred checks not yet known to have passed, in the order their steps were given; null when this kernel checks
+     * every rule in full at once. Touched only by the thread that calls the rules.
+     */
+    private final java.util.ArrayDeque<Deferred> outstanding;
     /**
      * Large terms (more than 64 nodes as a tree) all of whose symbols the signature admitted when an earlier step
      * stated them. The signature only grows and never changes a symbol it holds, so such a term stays admitted, and a
@@ -43,8 +53,22 @@ public final class Kernel {
     private final Map<Application, Boolean> admittedLarge = new java.util.WeakHashMap<>();
 
     public Kernel(Problem problem, TermFactory terms) {
+        this(problem, terms, false);
+    }
+
+    /**
+     * With {@code defer}, the clause rules that compute a unifier or a derived clause (resolve, factor, instantiate,
+     * paramodulate, eqres, eqfactor) split their check in two. What depends on the kernel's state as it stands at the
+     * step is checked at once: that the premises are clause facts of this kernel, the literal indexes, and that every
+     * symbol of the conclusion and the substitutions is in the signature. The rest depends only on immutable inputs,
+     * and is returned undone as the {@link Fact#pending} check of a provisional fact, for the caller to run on any
+     * thread. Each split is the original check cut in two, in its original order, so a step's outcome is the same
+     * either way. {@link #settle} says whether every deferred check passed, and which step's failed first.
+     */
+    public Kernel(Problem problem, TermFactory terms, boolean defer) {
         this.problem = problem;
         this.terms = terms;
+        this.outstanding = defer ? new java.util.ArrayDeque<>() : null;
         this.none = Substitution.empty(terms);
         this.signature = new Signature(problem.signature());
         for (Map.Entry<String, Formula> e : problem.axioms().entrySet()) {
@@ -63,6 +87,31 @@ public final class Kernel {
     /** The signature as it stands after the steps accepted so far. */
     public Signature signature() {
         return signature;
+    }
+
+    /**
+     * Waits for every check deferred so far, running on this thread any that no thread has started: null when all
+     * passed, so that every fact this kernel has made is checked; otherwise the rejection of the first failed one in
+     * the order of the steps. A check that threw throws here. Null at once for a kernel that does not defer.
+     */
+    public Outcome.Rejected settle() throws InterruptedException {
+        if (outstanding == null) return null;
+        while (!outstanding.isEmpty()) {
+            Outcome.Rejected r = outstanding.peekFirst().outcome();
+            if (r != null) return r;
+            outstanding.pollFirst();
+        }
+        return null;
+    }
+
+    /** The step's own remaining check: run now, or, for a deferring kernel, left to a provisional fact. */
+    private Outcome later(String label, Clause stated, java.util.function.Supplier<Outcome> rest) {
+        if (outstanding == null) return rest.get();
+        // Drop the checks at the head that have passed, so that a long run keeps only the ones still in flight.
+        while (!outstanding.isEmpty() && outstanding.peekFirst().passed()) outstanding.pollFirst();
+        Deferred d = new Deferred(label, rest);
+        outstanding.addLast(d);
+        return new Outcome.Accepted(Fact.provisional(this, label, stated, d));
     }
 
     /** The axiom of this name as a premise, or null. The goal is never a premise. */
@@ -300,6 +349,13 @@ public final class Kernel {
         if (bad == null) bad = literalIndex(rule, b, j, stated);
         if (bad == null) bad = unknownSymbols(rule, null, stated, sa, sb);
         if (bad != null) return bad;
+        return later(label, stated, () -> resolveChecked(label, a, i, sa, b, j, sb, stated));
+    }
+
+    private Outcome resolveChecked(String label, Fact a, int i, Substitution sa, Fact b, int j, Substitution sb,
+                                   Clause stated) {
+        final String rule = "resolve";
+        Outcome bad;
         Literal li = a.clause().literal(i);
         Literal lj = b.clause().literal(j);
         if (li.positive() == lj.positive()) {
@@ -338,6 +394,12 @@ public final class Kernel {
         if (bad == null) bad = literalIndex(rule, a, j, stated);
         if (bad == null) bad = unknownSymbols(rule, null, stated, sigma);
         if (bad != null) return bad;
+        return later(label, stated, () -> factorChecked(label, a, i, j, sigma, stated));
+    }
+
+    private Outcome factorChecked(String label, Fact a, int i, int j, Substitution sigma, Clause stated) {
+        final String rule = "factor";
+        Outcome bad;
         if (i == j) return reject(rule, "factoring needs two different literals, not " + ref(a, i) + " twice",
                 Printer.clause(stated), null);
         Literal li = a.clause().literal(i);
@@ -368,6 +430,11 @@ public final class Kernel {
         if (bad == null) bad = unknownSymbols(rule, null, stated, sigma);
         if (bad == null) bad = domain(rule, sigma, a, stated);
         if (bad != null) return bad;
+        return later(label, stated, () -> instantiateChecked(label, a, sigma, stated));
+    }
+
+    private Outcome instantiateChecked(String label, Fact a, Substitution sigma, Clause stated) {
+        final String rule = "instantiate";
         return sameSet(rule, label, stated, sigma.apply(a.clause()));
     }
 
@@ -386,6 +453,13 @@ public final class Kernel {
         if (bad == null) bad = literalIndex(rule, b, j, stated);
         if (bad == null) bad = unknownSymbols(rule, null, stated, sa, sb);
         if (bad != null) return bad;
+        return later(label, stated, () -> paramodulateChecked(label, a, i, leftToRight, b, j, position, sa, sb, stated));
+    }
+
+    private Outcome paramodulateChecked(String label, Fact a, int i, boolean leftToRight, Fact b, int j, int[] position,
+                                        Substitution sa, Substitution sb, Clause stated) {
+        final String rule = "paramodulate";
+        Outcome bad;
         Literal eq = a.clause().literal(i);
         if (!eq.isEquation() || !eq.positive()) {
             return reject(rule, ref(a, i) + " is " + Printer.literal(eq, 200) + ", not an equation s = t",
@@ -445,6 +519,12 @@ public final class Kernel {
         if (bad == null) bad = literalIndex(rule, a, i, stated);
         if (bad == null) bad = unknownSymbols(rule, null, stated, sigma);
         if (bad != null) return bad;
+        return later(label, stated, () -> eqresChecked(label, a, i, sigma, stated));
+    }
+
+    private Outcome eqresChecked(String label, Fact a, int i, Substitution sigma, Clause stated) {
+        final String rule = "eqres";
+        Outcome bad;
         Literal l = a.clause().literal(i);
         if (!l.isEquation() || l.positive()) {
             return reject(rule, ref(a, i) + " is " + Printer.literal(l, 200) + ", not a disequation s != t",
@@ -481,6 +561,12 @@ public final class Kernel {
         if (bad == null) bad = literalIndex(rule, a, j, stated);
         if (bad == null) bad = unknownSymbols(rule, null, stated, sigma);
         if (bad != null) return bad;
+        return later(label, stated, () -> eqfactorChecked(label, a, i, j, sigma, stated));
+    }
+
+    private Outcome eqfactorChecked(String label, Fact a, int i, int j, Substitution sigma, Clause stated) {
+        final String rule = "eqfactor";
+        Outcome bad;
         if (i == j) {
             return reject(rule, "equality factoring needs two different literals, not " + ref(a, i) + " twice",
                     Printer.clause(stated), null);
@@ -764,7 +850,8 @@ public final class Kernel {
         List<Variable> theirs = a.variables();
         if (own.isEmpty() || theirs.isEmpty()) return b;
         // Long certificates resolve with one clause again and again, against clauses with the same variables.
-        if (b == apartFrom && theirs.equals(apartOf)) return apart;
+        Apart last = lastApart;
+        if (last != null && b == last.from() && theirs.equals(last.of())) return last.result();
         Set<Variable> inA = theirs.size() > 8 ? new HashSet<>(theirs) : null;
         Set<Variable> taken = null;
         LinkedHashMap<Variable, Term> renaming = null;
@@ -784,9 +871,8 @@ public final class Kernel {
                 }
             }
         }
-        apartFrom = b;
-        apartOf = theirs;
-        apart = renaming == null ? b : Substitution.owning(terms, renaming).apply(b);
+        Clause apart = renaming == null ? b : Substitution.owning(terms, renaming).apply(b);
+        lastApart = new Apart(b, theirs, apart);
         return apart;
     }
 
