@@ -150,9 +150,26 @@ public final class Checker {
         void step(Step step, Object conclusion, List<String> premises);
 
         void forget(Forget forget);
+
+        /**
+         * Whether {@link #step} is wanted. A listener that only counts takes {@link #progress} instead and answers
+         * false, which leaves the checker free to check steps on several threads (see {@link Options}).
+         */
+        default boolean wantsSteps() {
+            return true;
+        }
+
+        /** The number of steps read and passed on to the kernel so far, after each step. */
+        default void progress(int steps) {
+        }
     }
 
     private static final Listener SILENT = new Listener() {
+        @Override
+        public boolean wantsSteps() {
+            return false;
+        }
+
         @Override
         public void problem(Problem problem) {
         }
@@ -267,7 +284,19 @@ public final class Checker {
         int[] premiseIds = new int[4];
         int premiseCount;
         List<String> premiseNames;
+        /** Steps accepted in full so far; with deferred checks, counted when a step's check is known to have passed. */
         int steps;
+        /** Graph numbers handed out, one per step that passed its first part. */
+        int nextId;
+        /**
+         * With deferred checks: the steps given since the last one known to have passed, oldest first, every rule's
+         * step among them (one checked in full has no check), so that counting stays in the order of the steps.
+         */
+        java.util.ArrayDeque<Pending> window;
+        /** The batch being filled for the pool, and how many it holds. */
+        dev.assay.kernel.Deferred[] batch;
+        int batched;
+        CheckPool pool;
         String refutation;
         List<String> used = List.of();
         List<String> unused = List.of();
@@ -321,10 +350,16 @@ public final class Checker {
             int k = 0;
             for (String a : problem.axioms().keySet()) axiomIndex.put(a, k++);
             listener.problem(problem);
-            if (listener != SILENT) premiseNames = new ArrayList<>();
+            if (listener.wantsSteps()) premiseNames = new ArrayList<>();
             if (certificatePath == null) return;
             this.certificatePath = certificatePath;
-            kernel = new Kernel(problem, terms);
+            int workers = checkWorkers();
+            kernel = new Kernel(problem, terms, workers > 0);
+            if (workers > 0) {
+                window = new java.util.ArrayDeque<>();
+                batch = new dev.assay.kernel.Deferred[CheckPool.BATCH];
+                pool = new CheckPool(workers);
+            }
             CertificateSource source;
             try {
                 sizeLimit(certificateFile, certificatePath, "certificate");
@@ -334,20 +369,159 @@ public final class Checker {
                 if (interrupted(e)) throw stopped(new Location(certificateFile, 1, 1), "while opening the certificate");
                 throw inputError(certificateFile, "cannot read the certificate file: " + describe(e));
             }
-            try (source) {
+            try (source; CheckPool p = pool) {
                 // The reader enforces the order of the file (the header first and once, the digest right after it).
                 last = new Location(certificateFile, 1, 1);
                 while (someStatements(source)) {
                     // Batches keep the compiled form of this loop small (see someStatements).
                 }
                 certificateSha = source.sha256();
+                settleWindow();
                 finish(last);
+            } catch (Stop s) {
+                throw earlier(s);
             } catch (InterruptedException e) {
-                throw stoppedInCertificate();
+                throw earlier(stoppedInCertificate());
             } catch (IOException e) {
-                if (interrupted(e)) throw stoppedInCertificate();
-                throw inputError(certificateFile, "cannot read the certificate file: " + describe(e));
+                if (interrupted(e)) throw earlier(stoppedInCertificate());
+                throw earlier(inputError(certificateFile, "cannot read the certificate file: " + describe(e)));
             }
+        }
+
+        /** Threads for deferred checks: none unless the options ask for more threads than reading ahead takes. */
+        private int checkWorkers() {
+            if (listener.wantsSteps()) return 0;
+            return Math.max(0, options.threads() - 2);
+        }
+
+        /** A step given since the last one known to have passed: its check (null when checked in full) and where. */
+        private record Pending(dev.assay.kernel.Deferred check, String label, String rule, Location ruleAt,
+                               Location stepAt) {
+        }
+
+        /** How many steps the checking thread may be ahead of the checks before it runs the oldest itself. */
+        private static final int WINDOW = 16 * CheckPool.BATCH;
+
+        /** Takes a step that passed its first part into the window; its check, if any, goes to the pool. */
+        private void pending(Step s, String rule, dev.assay.kernel.Deferred check) throws Stop {
+            window.addLast(new Pending(check, s.label().text(), rule, s.rule().at(), s.at()));
+            if (check != null) {
+                batch[batched++] = check;
+                if (batched == batch.length) handOver();
+            }
+            reap();
+            while (window.size() > WINDOW) {
+                // Too far ahead: run a batch no thread has started (not the oldest check, which a pool thread is
+                // most likely running), or, when there is none, wait for the oldest.
+                handOver();
+                dev.assay.kernel.Deferred[] stolen = pool.steal();
+                if (stolen != null) {
+                    if (!CheckPool.run(stolen)) return;
+                } else {
+                    Pending head = window.peekFirst();
+                    try {
+                        Outcome.Rejected r = head.check() == null ? null : head.check().outcome();
+                        if (r != null) throw rejected(head, r);
+                    } catch (InterruptedException e) {
+                        // The time limit: the next step sees the flag and stops.
+                        Thread.currentThread().interrupt();
+                        return;
+                    }
+                }
+                reap();
+            }
+        }
+
+        private void handOver() {
+            if (batched == 0) return;
+            pool.submit(batch);
+            batch = new dev.assay.kernel.Deferred[CheckPool.BATCH];
+            batched = 0;
+        }
+
+        /** Counts the steps at the head of the window whose checks have passed; the first that failed ends the check. */
+        private void reap() throws Stop {
+            for (Pending p; (p = window.peekFirst()) != null; ) {
+                if (p.check() != null) {
+                    if (!p.check().isDone()) return;
+                    Outcome.Rejected r = outcomeOfDone(p);
+                    if (r != null) throw rejected(p, r);
+                }
+                window.pollFirst();
+                confirmed(p.rule());
+            }
+        }
+
+        private Outcome.Rejected outcomeOfDone(Pending p) {
+            try {
+                return p.check().outcome();
+            } catch (InterruptedException e) {
+                // A done check does not wait; keep the interrupt for the time limit.
+                Thread.currentThread().interrupt();
+                throw new IllegalStateException("a done check waited", e);
+            }
+        }
+
+        /** Waits for every step in the window; the first that failed ends the check. Then the kernel must agree. */
+        private void settleWindow() throws Stop, InterruptedException {
+            if (window == null) return;
+            handOver();
+            for (Pending p; (p = window.peekFirst()) != null; ) {
+                Outcome.Rejected r = p.check() == null ? null : p.check().outcome();
+                if (r != null) throw rejected(p, r);
+                window.pollFirst();
+                confirmed(p.rule());
+            }
+            if (kernel.settle() != null) throw new IllegalStateException("the kernel holds a failed check the window missed");
+        }
+
+        /**
+         * What ends the check when {@code stop} was met with steps still in the window: a step before it whose check
+         * failed, as checking in order would have found first; at the time limit, the first step not yet checked,
+         * without waiting for it; otherwise {@code stop} itself.
+         */
+        private Stop earlier(Stop stop) {
+            if (window == null || window.isEmpty()) return stop;
+            handOver();
+            // Each step before the failure that passes is counted, as checking in order would have counted it.
+            for (Pending p; (p = window.peekFirst()) != null; window.pollFirst(), confirmed(p.rule())) {
+                if (p.check() == null) continue;
+                if (stop.verdict == Verdict.TIMEOUT || Thread.currentThread().isInterrupted()) {
+                    if (!p.check().isDone()) {
+                        return new Stop(Verdict.TIMEOUT, new Failure(p.stepAt().file(), p.stepAt().line(),
+                                p.stepAt().column(), p.label(), null, "the check was stopped at its time limit before this"
+                                + " step", null, null, null));
+                    }
+                    Outcome.Rejected r = outcomeOfDone(p);
+                    if (r != null) return rejected(p, r);
+                    continue;
+                }
+                try {
+                    Outcome.Rejected r = p.check().outcome();
+                    if (r != null) return rejected(p, r);
+                } catch (InterruptedException e) {
+                    Thread.currentThread().interrupt();
+                    return earlier(stop);
+                }
+            }
+            return stop;
+        }
+
+        /** A deferred check's rejection: checking in order would have stopped there, before the file was read whole. */
+        private Stop rejected(Pending p, Outcome.Rejected r) {
+            certificateSha = null;
+            return rejected(p.ruleAt(), p.label(), r);
+        }
+
+        private Stop rejected(Location ruleAt, String label, Outcome.Rejected r) {
+            return new Stop(Verdict.REJECTED, new Failure(ruleAt.file(), ruleAt.line(), ruleAt.column(), label, r.rule(),
+                    r.reason(), r.stated(), r.derived(), null));
+        }
+
+        /** Counts a step whose check has passed. */
+        private void confirmed(String rule) {
+            steps++;
+            byRule.computeIfAbsent(rule, r -> new int[1])[0]++;
         }
 
         /** Where the last statement read begins. */
@@ -465,7 +639,7 @@ public final class Checker {
             }
             String label = s.label().text();
             String rule = s.args().ruleName();
-            if (steps >= options.maxSteps()) {
+            if (nextId >= options.maxSteps()) {
                 throw inputError(s.at(), "the certificate has more than " + options.maxSteps()
                         + " steps, the step count limit (raise it with --max-steps)");
             }
@@ -477,6 +651,16 @@ public final class Checker {
                 throw reject(s.label().at(), label, rule, "the label " + label + " is the name of a problem "
                         + (label.equals(problem.goalName()) ? "goal" : "axiom"));
             }
+            if (window != null && (rule.equals("skolemize") || rule.equals("define"))) {
+                // These extend the signature, which a report lists: the steps before must have passed first.
+                try {
+                    settleWindow();
+                } catch (InterruptedException e) {
+                    Thread.currentThread().interrupt();
+                    throw earlier(new Stop(Verdict.TIMEOUT, new Failure(s.at().file(), s.at().line(), s.at().column(),
+                            label, null, "the check was stopped at its time limit before this step", null, null, null)));
+                }
+            }
             premiseCount = 0;
             if (premiseNames != null) premiseNames.clear();
             Outcome o;
@@ -487,13 +671,11 @@ public final class Checker {
             } catch (StepProblem p) {
                 throw reject(p.at(), label, rule, p.reason());
             }
-            if (o instanceof Outcome.Rejected r) {
-                throw new Stop(Verdict.REJECTED, new Failure(s.rule().at().file(), s.rule().at().line(),
-                        s.rule().at().column(), label, r.rule(), r.reason(), r.stated(), r.derived(), null));
-            }
+            if (o instanceof Outcome.Rejected r) throw rejected(s.rule().at(), label, r);
             Fact fact = ((Outcome.Accepted) o).fact();
-            int id = steps++;
-            byRule.computeIfAbsent(rule, r -> new int[1])[0]++;
+            int id = nextId++;
+            if (window == null || (window.isEmpty() && fact.pending() == null)) confirmed(rule);
+            else pending(s, rule, fact.pending());
             live.put(label, new Live(fact, id, s.label().at().line(), s.label().at().column()));
             if (refutation == null) {
                 graph.add(premiseIds, premiseCount);
@@ -506,6 +688,7 @@ public final class Checker {
             if (premiseNames != null) {
                 listener.step(s, fact.isClause() ? fact.clause() : fact.formula(), List.copyOf(premiseNames));
             }
+            listener.progress(nextId);
         }
 
         private void premiseId(int id) {

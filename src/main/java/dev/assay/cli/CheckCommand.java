@@ -61,7 +61,6 @@ final class CheckCommand implements Callable<Integer> {
         HtmlReport page = html == null ? null : new HtmlReport();
         Checker checker = new Checker(options);
         Progress progress = new Progress(spec.commandLine().getErr(), 0, "steps checked");
-        int[] steps = {0};
         Checker.Listener listener = new Checker.Listener() {
             @Override
             public void problem(dev.assay.kernel.Problem p) {
@@ -69,9 +68,18 @@ final class CheckCommand implements Callable<Integer> {
             }
 
             @Override
+            public boolean wantsSteps() {
+                return page != null;
+            }
+
+            @Override
             public void step(dev.assay.syntax.Step s, Object conclusion, java.util.List<String> premises) {
-                if (page != null) page.step(s, conclusion, premises);
-                if (!quiet) progress.update(++steps[0]);
+                page.step(s, conclusion, premises);
+            }
+
+            @Override
+            public void progress(int steps) {
+                if (!quiet) progress.update(steps);
             }
 
             @Override

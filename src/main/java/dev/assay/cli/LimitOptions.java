@@ -21,8 +21,9 @@ final class LimitOptions {
     long maxSteps = Checker.Options.DEFAULT_MAX_STEPS;
 
     @Option(names = "--threads", paramLabel = "N",
-            description = "threads per check: 1 reads and checks in turn, 2 or more read ahead while checking (default: 2,"
-                    + " or 1 on one processor; in a gate, 1 when its jobs already take every processor)")
+            description = "threads per check: 1 reads and checks in turn, 2 reads ahead while checking, 3 or more also"
+                    + " check steps on N-2 further threads (default: 2, or 1 on one processor; in a gate, 1 when its jobs"
+                    + " already take every processor)")
     Integer threads;
 
     /** The checker options for {@code jobs} checks at once, or null after printing why they are not valid. */
