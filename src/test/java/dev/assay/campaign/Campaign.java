@@ -239,9 +239,24 @@ final class Campaign {
         return j;
     }
 
+    /**
+     * Mutants whose report from a check on four threads (reading ahead, two threads for the kernel's deferred checks)
+     * differs from the judged check's, which checks every step in order: the first few, with both reports.
+     */
+    final List<String> threadDifferences = new ArrayList<>();
+    int threadComparisons;
+    int threadDifferenceCount;
+    private static final Checker PARALLEL = new Checker(Checker.Options.defaults().withThreads(4));
+
     Outcome check(Path problem, Path proof) {
         Judge judge = new Judge();
         CheckResult r = new Checker().check(problem, proof, judge);
+        String inOrder = dev.assay.report.JsonReport.render(r, false);
+        String parallel = dev.assay.report.JsonReport.render(PARALLEL.check(problem, proof), false);
+        threadComparisons++;
+        if (!inOrder.equals(parallel) && threadDifferenceCount++ < 5) {
+            threadDifferences.add(proof + " (" + problem + "):\n" + inOrder + "\nbut on four threads:\n" + parallel);
+        }
         Judgement whole = null;
         Verdict v = r.verdict();
         if (v == Verdict.THEOREM || v == Verdict.UNSATISFIABLE || v == Verdict.VACUOUS) whole = whole(problem, judge.problem, v);

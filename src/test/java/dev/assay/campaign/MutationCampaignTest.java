@@ -139,6 +139,11 @@ class MutationCampaignTest {
         String report = System.getProperty("assay.campaign.report");
         if (report != null) Files.writeString(Path.of(report), summary + table, StandardCharsets.UTF_8);
 
+        System.out.printf(Locale.ROOT, "[campaign] %d checks repeated on four threads, %d with another report%n",
+                campaign.threadComparisons, campaign.threadDifferenceCount);
+        if (!campaign.threadDifferences.isEmpty()) {
+            fail("checking on four threads changed the report:\n" + campaign.threadDifferences.get(0));
+        }
         if (!campaign.findings.isEmpty()) {
             StringBuilder sb = new StringBuilder(campaign.findings.size() + " unsound accepted steps:\n");
             for (Campaign.Finding f : campaign.findings.subList(0, Math.min(5, campaign.findings.size()))) {

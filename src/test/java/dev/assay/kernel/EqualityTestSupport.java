@@ -39,16 +39,16 @@ abstract class EqualityTestSupport extends RuleTestSupport {
             case "<-" -> RIGHT_TO_LEFT;
             default -> throw new IllegalArgumentException("arrow " + arrow);
         };
-        return kernel.paramodulate(label, fact(a), i, leftToRight, fact(b), j, position(at), subst(sa), subst(sb),
-                k.clause(stated));
+        return settled(kernel.paramodulate(label, fact(a), i, leftToRight, fact(b), j, position(at), subst(sa),
+                subst(sb), k.clause(stated)));
     }
 
     Outcome eqres(String a, int i, String sigma, String stated) {
-        return kernel.eqres(label, fact(a), i, subst(sigma), k.clause(stated));
+        return settled(kernel.eqres(label, fact(a), i, subst(sigma), k.clause(stated)));
     }
 
     Outcome eqfactor(String a, int i, int j, String sigma, String stated) {
-        return kernel.eqfactor(label, fact(a), i, j, subst(sigma), k.clause(stated));
+        return settled(kernel.eqfactor(label, fact(a), i, j, subst(sigma), k.clause(stated)));
     }
 
     Outcome reflexivity(String stated) {

@@ -21,7 +21,7 @@ class FactorRuleTest extends RuleTestSupport {
     }
 
     private Outcome factor(String a, int i, int j, String sigma, String stated) {
-        return kernel.factor("s", fact(a), i, j, sigma == null ? null : k.substitution(sigma), k.clause(stated));
+        return settled(kernel.factor("s", fact(a), i, j, sigma == null ? null : k.substitution(sigma), k.clause(stated)));
     }
 
     // ------------------------------------------------------------------ acceptance

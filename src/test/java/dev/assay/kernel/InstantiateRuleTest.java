@@ -15,7 +15,7 @@ class InstantiateRuleTest extends RuleTestSupport {
     }
 
     private Outcome instantiate(String a, String sigma, String stated) {
-        return kernel.instantiate("s", fact(a), k.substitution(sigma), k.clause(stated));
+        return settled(kernel.instantiate("s", fact(a), k.substitution(sigma), k.clause(stated)));
     }
 
     @Test

@@ -33,12 +33,12 @@ class ResolveRuleTest extends RuleTestSupport {
     }
 
     private Outcome resolve(String a, int i, String b, int j, String stated) {
-        return kernel.resolve("s", fact(a), i, null, fact(b), j, null, k.clause(stated));
+        return settled(kernel.resolve("s", fact(a), i, null, fact(b), j, null, k.clause(stated)));
     }
 
     private Outcome resolve(String a, int i, String sa, String b, int j, String sb, String stated) {
-        return kernel.resolve("s", fact(a), i, sa == null ? null : k.substitution(sa), fact(b), j,
-                sb == null ? null : k.substitution(sb), k.clause(stated));
+        return settled(kernel.resolve("s", fact(a), i, sa == null ? null : k.substitution(sa), fact(b), j,
+                sb == null ? null : k.substitution(sb), k.clause(stated)));
     }
 
     // ------------------------------------------------------------------ acceptance
