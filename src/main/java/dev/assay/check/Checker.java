@@ -441,70 +441,61 @@ public final class Checker {
 
         /** Counts the steps at the head of the window whose checks have passed; the first that failed ends the check. */
         private void reap() throws Stop {
-            for (Pending p; (p = window.peekFirst()) != null; ) {
-                if (p.check() != null) {
-                    if (!p.check().isDone()) return;
-                    Outcome.Rejected r = outcomeOfDone(p);
-                    if (r != null) throw rejected(p, r);
-                }
-                window.pollFirst();
-                confirmed(p.rule());
-            }
-        }
-
-        private Outcome.Rejected outcomeOfDone(Pending p) {
+            Stop failed;
             try {
-                return p.check().outcome();
+                failed = drain(false);
             } catch (InterruptedException e) {
-                // A done check does not wait; keep the interrupt for the time limit.
+                // Without waiting, only done checks are asked, and a done check does not wait.
                 Thread.currentThread().interrupt();
                 throw new IllegalStateException("a done check waited", e);
             }
+            if (failed != null) throw failed;
+        }
+
+        /**
+         * Counts the steps of the window, oldest first, while their checks pass: waiting for each with {@code wait},
+         * else stopping at the first not done. The rejection of the first that failed, or null.
+         */
+        private Stop drain(boolean wait) throws InterruptedException {
+            for (Pending p; (p = window.peekFirst()) != null; window.pollFirst(), confirmed(p.rule())) {
+                if (p.check() == null) continue;
+                if (!wait && !p.check().isDone()) return null;
+                Outcome.Rejected r = p.check().outcome();
+                if (r != null) return rejected(p, r);
+            }
+            return null;
         }
 
         /** Waits for every step in the window; the first that failed ends the check. Then the kernel must agree. */
         private void settleWindow() throws Stop, InterruptedException {
             if (window == null) return;
             handOver();
-            for (Pending p; (p = window.peekFirst()) != null; ) {
-                Outcome.Rejected r = p.check() == null ? null : p.check().outcome();
-                if (r != null) throw rejected(p, r);
-                window.pollFirst();
-                confirmed(p.rule());
-            }
+            Stop failed = drain(true);
+            if (failed != null) throw failed;
             if (kernel.settle() != null) throw new IllegalStateException("the kernel holds a failed check the window missed");
         }
 
         /**
          * What ends the check when {@code stop} was met with steps still in the window: a step before it whose check
          * failed, as checking in order would have found first; at the time limit, the first step not yet checked,
-         * without waiting for it; otherwise {@code stop} itself.
+         * without waiting for it; otherwise {@code stop} itself. Each step before that passed is counted, as checking
+         * in order would have counted it.
          */
         private Stop earlier(Stop stop) {
             if (window == null || window.isEmpty()) return stop;
             handOver();
-            // Each step before the failure that passes is counted, as checking in order would have counted it.
-            for (Pending p; (p = window.peekFirst()) != null; window.pollFirst(), confirmed(p.rule())) {
-                if (p.check() == null) continue;
-                if (stop.verdict == Verdict.TIMEOUT || Thread.currentThread().isInterrupted()) {
-                    if (!p.check().isDone()) {
-                        return new Stop(Verdict.TIMEOUT, new Failure(p.stepAt().file(), p.stepAt().line(),
-                                p.stepAt().column(), p.label(), null, "the check was stopped at its time limit before this"
-                                + " step", null, null, null));
-                    }
-                    Outcome.Rejected r = outcomeOfDone(p);
-                    if (r != null) return rejected(p, r);
-                    continue;
-                }
-                try {
-                    Outcome.Rejected r = p.check().outcome();
-                    if (r != null) return rejected(p, r);
-                } catch (InterruptedException e) {
-                    Thread.currentThread().interrupt();
-                    return earlier(stop);
-                }
+            boolean timeUp = stop.verdict == Verdict.TIMEOUT || Thread.currentThread().isInterrupted();
+            try {
+                Stop failed = drain(!timeUp);
+                if (failed != null) return failed;
+            } catch (InterruptedException e) {
+                Thread.currentThread().interrupt();
+                return earlier(stop);
             }
-            return stop;
+            Pending p = window.peekFirst();
+            if (p == null) return stop;
+            return new Stop(Verdict.TIMEOUT, new Failure(p.stepAt().file(), p.stepAt().line(), p.stepAt().column(),
+                    p.label(), null, "the check was stopped at its time limit before this step", null, null, null));
         }
 
         /** A deferred check's rejection: checking in order would have stopped there, before the file was read whole. */

@@ -19,21 +19,14 @@ public final class Deferred implements Runnable {
     private static final int DONE = 2;
 
     private final AtomicInteger state = new AtomicInteger(WAITING);
-    private final String label;
     /** The check itself; dropped once it has run, so that a done check keeps nothing of its step alive. */
     private Supplier<Outcome> work;
     /** Written before the state becomes DONE, read only after it has. */
     private Outcome.Rejected rejected;
     private Throwable thrown;
 
-    Deferred(String label, Supplier<Outcome> work) {
-        this.label = label;
+    Deferred(Supplier<Outcome> work) {
         this.work = work;
-    }
-
-    /** The label of the step this check belongs to. */
-    public String label() {
-        return label;
     }
 
     /** Runs the check, unless some thread has already started it. */

@@ -109,7 +109,7 @@ public final class Kernel {
         if (outstanding == null) return rest.get();
         // Drop the checks at the head that have passed, so that a long run keeps only the ones still in flight.
         while (!outstanding.isEmpty() && outstanding.peekFirst().passed()) outstanding.pollFirst();
-        Deferred d = new Deferred(label, rest);
+        Deferred d = new Deferred(rest);
         outstanding.addLast(d);
         return new Outcome.Accepted(Fact.provisional(this, label, stated, d));
     }
